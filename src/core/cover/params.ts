@@ -1,0 +1,36 @@
+import type { MetricName } from "../metric/types.ts";
+
+export type ScaleName = "none" | "zscore" | "minmax" | "robust";
+export type LandmarkRule = "greedy" | "random" | "maximin";
+/** What happens to a row with a missing feature value, before scaling. */
+export type MissingPolicy = "drop" | "median" | "mean";
+
+/** Every parameter that decides a cover graph; together with the input file they reproduce it. */
+export interface CoverParams {
+  readonly features: readonly string[];
+  readonly scale: ScaleName;
+  readonly metric: MetricName;
+  readonly radius: number;
+  /** greedy: ε-net in file order; random: ε-net in an order shuffled by `seed`; maximin: farthest point from a seeded start. */
+  readonly landmarks: LandmarkRule;
+  readonly seed: number;
+  /** Factor per feature applied after scaling; absent features weigh 1. */
+  readonly weights?: Readonly<Record<string, number>>;
+  /** Default "drop". */
+  readonly missing?: MissingPolicy;
+}
+
+export const scaleNames: readonly ScaleName[] = ["zscore", "robust", "minmax", "none"];
+export const landmarkRules: readonly LandmarkRule[] = ["greedy", "random", "maximin"];
+export const missingPolicies: readonly MissingPolicy[] = ["drop", "median", "mean"];
+
+function maybeOneOf<T extends string>(names: readonly T[], what: string): (name: string) => T {
+  return (name) => {
+    if (!(names as readonly string[]).includes(name)) throw new Error(`invalid ${what}: ${name}`);
+    return name as T;
+  };
+}
+
+export const maybeLandmarkRule = maybeOneOf(landmarkRules, "landmark rule");
+export const maybeScale = maybeOneOf(scaleNames, "scaling");
+export const maybeMissingPolicy = maybeOneOf(missingPolicies, "missing-value policy");

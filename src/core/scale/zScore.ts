@@ -1,0 +1,29 @@
+import type { NumericTable } from "../table/types.ts";
+import { columnTransform } from "./columnTransform.ts";
+
+export interface ScaledTable {
+  readonly table: NumericTable;
+  /** Names of columns that were constant (zero spread); they are set to 0. */
+  readonly constantColumns: readonly string[];
+}
+
+/**
+ * Z-score scaling per column: z = (x − mean) / s, with s the sample standard deviation
+ * (divides by n − 1, the usual choice of statistics libraries; e.g. R's sd()), mean and s by
+ * Welford's one-pass update (B. P. Welford, Technometrics 4(3):419–420, 1962).
+ * A constant column (s = 0) becomes all 0 and is reported; so is every column of a one-row
+ * table (s is undefined there). O(n·d); returns a new table.
+ * @example zScore({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3) }).table.values // => Float64Array [-1, 0, 1]
+ */
+export function zScore(input: NumericTable): ScaledTable {
+  return columnTransform(input, (column) => {
+    let mean = 0;
+    let m2 = 0;
+    for (let i = 0; i < column.length; ++i) {
+      const delta = column[i]! - mean;
+      mean += delta / (i + 1);
+      m2 += delta * (column[i]! - mean);
+    }
+    return { center: mean, spread: column.length > 1 ? Math.sqrt(m2 / (column.length - 1)) : 0 };
+  });
+}

@@ -1,0 +1,18 @@
+import { createStore, type StoreApi } from "zustand/vanilla";
+import { initialData, type DataSlice } from "./slices/dataSlice.ts";
+import { initialParams, type ParamsSlice } from "./slices/paramsSlice.ts";
+import { initialResult, type ResultSlice } from "./slices/resultSlice.ts";
+import { initialSelection, type SelectionSlice } from "./slices/selectionSlice.ts";
+
+/** Inputs (table, parameters, selection) and the latest result; nothing derivable from them. */
+export type WorkbenchState = DataSlice & ParamsSlice & ResultSlice & SelectionSlice;
+export type WorkbenchStore = StoreApi<WorkbenchState>;
+
+export const initialState: WorkbenchState = { ...initialData, ...initialParams, ...initialResult, ...initialSelection };
+
+export function createWorkbenchStore(): WorkbenchStore {
+  return createStore<WorkbenchState>()(() => initialState);
+}
+
+/** The application's one store. Tests make their own with createWorkbenchStore(). */
+export const workbenchStore = createWorkbenchStore();

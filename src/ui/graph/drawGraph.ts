@@ -1,0 +1,80 @@
+import type { ScaleSequential } from "d3-scale";
+import { missingColor, plainColor } from "./scales.ts";
+import type { Layout } from "./useForceLayout.ts";
+
+/** Screen = world · k + (x, y). */
+export interface View {
+  readonly k: number;
+  readonly x: number;
+  readonly y: number;
+}
+
+/** Fits the layout's bounding box (with node radii) into the canvas with a margin; never zooms past 1.6×. */
+export function fitTransform(layout: Layout, width: number, height: number, margin = 16): View {
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const n of layout.nodes) {
+    x0 = Math.min(x0, n.x - n.radius);
+    y0 = Math.min(y0, n.y - n.radius);
+    x1 = Math.max(x1, n.x + n.radius);
+    y1 = Math.max(y1, n.y + n.radius);
+  }
+  if (!(x1 > x0) || !(y1 > y0)) return { k: 1, x: width / 2, y: height / 2 };
+  const k = Math.min(1.6, (width - 2 * margin) / (x1 - x0), (height - 2 * margin) / (y1 - y0));
+  return { k, x: width / 2 - k * (x0 + x1) / 2, y: height / 2 - k * (y0 + y1) / 2 };
+}
+
+export interface Paint {
+  readonly width: number;
+  readonly height: number;
+  readonly values: Float64Array | null;
+  readonly scale: ScaleSequential<string> | null;
+  readonly selected: number | null;
+}
+
+export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, view: View, paint: Paint): void {
+  context.clearRect(0, 0, paint.width, paint.height);
+  context.save();
+  context.translate(view.x, view.y);
+  context.scale(view.k, view.k);
+  context.strokeStyle = "rgba(70, 80, 95, 0.45)";
+  for (const link of layout.links) {
+    context.lineWidth = (0.6 + Math.log2(link.shared)) / view.k;
+    context.beginPath();
+    context.moveTo(link.source.x, link.source.y);
+    context.lineTo(link.target.x, link.target.y);
+    context.stroke();
+  }
+  for (const node of layout.nodes) {
+    const value = paint.values?.[node.index];
+    context.fillStyle = !paint.scale || value === undefined ? plainColor : Number.isNaN(value) ? missingColor : paint.scale(value);
+    context.beginPath();
+    context.arc(node.x, node.y, node.radius, 0, 2 * Math.PI);
+    context.fill();
+    context.lineWidth = 1 / view.k;
+    context.strokeStyle = "#f7f4ec";
+    context.stroke();
+  }
+  const chosen = paint.selected === null ? undefined : layout.nodes[paint.selected];
+  if (chosen) {
+    context.lineWidth = 3 / view.k;
+    context.strokeStyle = "#c2410c";
+    context.setLineDash([4 / view.k, 3 / view.k]);
+    context.beginPath();
+    context.arc(chosen.x, chosen.y, chosen.radius + 4 / view.k, 0, 2 * Math.PI);
+    context.stroke();
+    context.setLineDash([]);
+  }
+  context.restore();
+}
+
+/** The topmost node under a screen point, or null. */
+export function hitNode(layout: Layout, view: View, screenX: number, screenY: number): number | null {
+  const x = (screenX - view.x) / view.k;
+  const y = (screenY - view.y) / view.k;
+  for (let i = layout.nodes.length - 1; i >= 0; --i) {
+    const node = layout.nodes[i]!;
+    const slack = Math.max(node.radius, 6 / view.k);
+    if ((node.x - x) ** 2 + (node.y - y) ** 2 <= slack * slack) return node.index;
+  }
+  return null;
+}

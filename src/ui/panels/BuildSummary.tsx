@@ -1,0 +1,68 @@
+import { formatCount, plural } from "../format.ts";
+import { selectFeatureNames } from "../../state/selectors.ts";
+import { useWorkbench } from "../useWorkbench.ts";
+
+/** Progress while the worker builds, then the graph's counts and every row left out. */
+export function BuildSummary() {
+  const build = useWorkbench((s) => s.build);
+  const result = useWorkbench((s) => s.result);
+  const noFeatures = useWorkbench((s) => s.table !== null && selectFeatureNames(s).length === 0);
+  return (
+    <section className="build-summary" aria-live="polite">
+      {build.state === "running" && (
+        <div className="progress" data-testid="build-progress">
+          <span>Building{build.phase ? `: ${build.phase}` : "…"}</span>
+          <progress max={1} value={build.fraction} />
+        </div>
+      )}
+      {noFeatures && <p role="alert" className="error">Choose at least one feature column to build a graph.</p>}
+      {build.state === "failed" && <p role="alert" className="error">Build failed: {build.error}</p>}
+      {result && (
+        <dl className="counts" data-testid="graph-counts">
+          <div><dt>nodes</dt><dd data-testid="node-count">{formatCount(result.landmarks.length)}</dd></div>
+          <div><dt>edges</dt><dd data-testid="edge-count">{formatCount(result.edges.source.length)}</dd></div>
+          <div><dt>components</dt><dd data-testid="component-count">{formatCount(result.componentCount)}</dd></div>
+          <div><dt>cycle rank</dt><dd data-testid="cycle-rank">{formatCount(result.cycleRank)}</dd></div>
+          <div><dt>b0</dt><dd data-testid="b0">{result.betti ? formatCount(result.betti.b0) : "–"}</dd></div>
+          <div><dt>b1</dt><dd data-testid="b1">{result.betti ? formatCount(result.betti.b1) : "–"}</dd></div>
+          <div>
+            <dt>rows used</dt>
+            <dd>{formatCount(result.usedRows.length)} of {formatCount(result.rowsRead)}</dd>
+          </div>
+        </dl>
+      )}
+      {result && (
+        <p className="loops-note">
+          Nodes are balls, edges join balls that share rows. Cycle rank (edges − nodes + components) counts every triangle of
+          three overlapping balls; b0 and b1 count the pieces and the loops of the nerve once triangles of balls sharing a row
+          are filled in. Both are properties of this sample: three balls may overlap in pairs with no row in all three, which
+          adds a loop.
+        </p>
+      )}
+      {result && result.undefinedRows.length > 0 && (
+        <p className="note" data-testid="undefined-note">
+          {plural(result.undefinedRows.length, "row")} left out because the {result.params.metric} distance is undefined on
+          them (rows {Array.from(result.undefinedRows.subarray(0, 8), (r) => r + 1).join(", ")}
+          {result.undefinedRows.length > 8 ? ", …" : ""}).
+        </p>
+      )}
+      {result && Object.values(result.imputed).some((n) => n > 0) && (
+        <p className="note">
+          Filled in ({result.params.missing}):{" "}
+          {Object.entries(result.imputed).filter(([, n]) => n > 0).map(([name, n]) => `${name} ${n}`).join(", ")}.
+        </p>
+      )}
+      {result && result.droppedRows.length > 0 && (
+        <p className="note" data-testid="dropped-note">
+          {plural(result.droppedRows.length, "row")} left out for a missing feature value (rows{" "}
+          {Array.from(result.droppedRows.subarray(0, 8), (r) => r + 1).join(", ")}
+          {result.droppedRows.length > 8 ? ", …" : ""}); they keep their row numbers in every export.
+        </p>
+      )}
+      {result && result.constantColumns.length > 0 && (
+        <p className="note">Constant columns set to 0: {result.constantColumns.join(", ")}.</p>
+      )}
+      {build.elapsedMs !== null && <p className="note">Built in {Math.round(build.elapsedMs)} ms.</p>}
+    </section>
+  );
+}

@@ -1,0 +1,40 @@
+import { actions } from "../../state/actions.ts";
+import type { ColumnRole } from "../../state/slices/paramsSlice.ts";
+import { useWorkbench } from "../useWorkbench.ts";
+
+const numericRoles: readonly ColumnRole[] = ["feature", "outcome", "id", "ignore"];
+const textRoles: readonly ColumnRole[] = ["id", "ignore"];
+const roleLabel: Record<ColumnRole, string> = { feature: "feature", outcome: "outcome", id: "row label", ignore: "not used" };
+
+/** Every column with its role: features span the space; outcomes are only summarised and coloured. */
+export function ColumnRoles() {
+  const table = useWorkbench((s) => s.table);
+  const roles = useWorkbench((s) => s.roles);
+  if (!table) return null;
+  return (
+    <fieldset className="column-roles">
+      <legend>Columns</legend>
+      <ul>
+        {table.columns.map((column) => (
+          <li key={column.name}>
+            <label>
+              <span className="column-name" title={`${column.kind}; ${column.missing} missing`}>
+                {column.name}
+                {column.missing > 0 && <span className="missing-count"> ({column.missing} missing)</span>}
+              </span>
+              <select
+                aria-label={`role of ${column.name}`}
+                value={roles[column.name] ?? "ignore"}
+                onChange={(event) => void actions().setRole(column.name, event.currentTarget.value as ColumnRole)}
+              >
+                {(column.kind === "numeric" ? numericRoles : textRoles).map((role) => (
+                  <option key={role} value={role}>{roleLabel[role]}</option>
+                ))}
+              </select>
+            </label>
+          </li>
+        ))}
+      </ul>
+    </fieldset>
+  );
+}

@@ -1,0 +1,22 @@
+import { actions } from "../../state/actions.ts";
+import { downloadBytes } from "../download.ts";
+import { useWorkbench } from "../useWorkbench.ts";
+
+/** One zip: nodes.csv, members.csv (the node membership table), edges.csv and summary.json. */
+export function ExportButton() {
+  const ready = useWorkbench((s) => s.result !== null);
+  return (
+    <button
+      type="button"
+      className="primary"
+      disabled={!ready}
+      title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README)"
+      onClick={() => {
+        const file = actions().exportCover();
+        if (file) downloadBytes(file.fileName, file.bytes, "application/zip");
+      }}
+    >
+      Export tables (.zip)
+    </button>
+  );
+}

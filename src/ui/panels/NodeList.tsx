@@ -1,0 +1,33 @@
+import { actions } from "../../state/actions.ts";
+import { selectNodeColorValues } from "../../state/selectors.ts";
+import { formatNumber, plural } from "../format.ts";
+import { useWorkbench } from "../useWorkbench.ts";
+
+/** Keyboard route to every node: a native list box (arrow keys move, the choice opens the node). */
+export function NodeList() {
+  const result = useWorkbench((s) => s.result);
+  const selected = useWorkbench((s) => s.selectedNode);
+  const colors = useWorkbench(selectNodeColorValues);
+  const colorBy = useWorkbench((s) => s.colorBy);
+  if (!result) return null;
+  const { offsets } = result.members;
+  return (
+    <label className="node-list">
+      <span>Nodes ({result.landmarks.length})</span>
+      <select
+        size={8}
+        aria-label="nodes"
+        value={selected === null ? "" : String(selected)}
+        onChange={(e) => actions().selectNode(Number(e.currentTarget.value))}
+      >
+        <option value="" disabled>no node open</option>
+        {Array.from(result.landmarks, (_, k) => (
+          <option key={k} value={k}>
+            Node {k + 1} · {plural(offsets[k + 1]! - offsets[k]!, "row")}
+            {colors && colorBy ? ` · ${colorBy} ${formatNumber(colors[k]!)}` : ""}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}

