@@ -3,12 +3,15 @@ import { components } from "../graph/components.ts";
 import { nerveBetti, type NerveBetti } from "../graph/nerveBetti.ts";
 import { nerveTriangles } from "../graph/nerveTriangles.ts";
 import { overlapEdges, type EdgeList } from "../graph/overlapEdges.ts";
-import { chooseLandmarks } from "../landmark/chooseLandmarks.ts";
 import { maybeMetric } from "../metric/metrics.ts";
+import { randomSource, shuffledOrder } from "../random.ts";
+import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
+import { maximinBalls } from "../search/maximinBalls.ts";
+import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import { scaleTable } from "../scale/scaleTable.ts";
 import type { ParsedTable } from "../table/types.ts";
 import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "./params.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "./params.ts";
 import { selectFeatures } from "../table/selectFeatures.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
@@ -53,7 +56,11 @@ export interface BuildOptions {
  * r around each, one node per ball, an edge wherever two balls share rows (the 1-skeleton of
  * the nerve of the cover), connected components, cycle rank and the nerve's b0 and b1.
  * Nerve: H. Edelsbrunner and J. Harer, Computational Topology, AMS 2010, §III.2.
- * Cost: O(n·L·d) for n rows, L landmarks, d features, plus the loops step.
+ * One candidate index (search/rowIndex.ts) serves the net and the balls; it only skips pairs the
+ * reference predicate provably rejects. Where it prunes well, each landmark's ball is found when
+ * the landmark is placed (search/greedyBalls.ts, search/maximinBalls.ts) and the "members" phase
+ * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time.
+ * Cost: O(n·L·d) at worst for n rows, L landmarks, d features, plus the loops step.
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
   const { onProgress, now = Date.now, loops = true } = options;
@@ -79,16 +86,21 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const scaleTime = lap();
 
   onProgress?.("landmarks", 0);
-  const centers = chooseLandmarks(table, metric, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
+  const index = createRowIndex(table, metric);
+  const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
+  const centers = net.landmarks;
   const landmarkTime = lap();
 
   onProgress?.("members", 0);
-  const local = ballMembership(table, metric, params.radius, centers, (done, total) => onProgress?.("members", done / total));
+  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
+  const local = net.members ?? ballMembership(table, metric, params.radius, centers, membersProgress, { index });
+  // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
+  if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
+  const rowNodes = rowsToNodes(local, table.rows);
   const memberTime = lap();
 
   onProgress?.("edges", 0);
-  const rowNodes = rowsToNodes(local, table.rows);
-  const edges = overlapEdges(rowNodes, centers.length);
+  const edges = overlapEdges(rowNodes, centers.length, local);
   const edgeTime = lap();
 
   const { component, count } = components(centers.length, edges.source, edges.target);
@@ -116,4 +128,15 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     betti,
     timings: { scale: scaleTime, landmarks: landmarkTime, members: memberTime, edges: edgeTime, components: componentTime, loops: loopTime },
   };
+}
+
+/** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */
+function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule, seed: number, onProgress: (fraction: number) => void): NetWithBalls {
+  const n = index.table.rows;
+  if (rule === "maximin") {
+    if (n === 0) return { landmarks: new Uint32Array(0), members: { offsets: Uint32Array.of(0), items: new Uint32Array(0) } };
+    return maximinBalls(index, radius, Math.floor(randomSource(seed)() * n), { onProgress: (done, total) => onProgress(done / total) });
+  }
+  const order = rule === "random" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
+  return greedyBalls(index, radius, order, { onProgress: (done, total) => onProgress(done / total) });
 }

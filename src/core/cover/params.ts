@@ -34,3 +34,8 @@ function maybeOneOf<T extends string>(names: readonly T[], what: string): (name:
 export const maybeLandmarkRule = maybeOneOf(landmarkRules, "landmark rule");
 export const maybeScale = maybeOneOf(scaleNames, "scaling");
 export const maybeMissingPolicy = maybeOneOf(missingPolicies, "missing-value policy");
+
+/** The weights that matter: only features, and only factors other than 1 (so equal recipes compare equal). */
+export function featureWeights(features: readonly string[], weights: Readonly<Record<string, number>>): Record<string, number> {
+  return Object.fromEntries(features.flatMap((name) => (name in weights && weights[name] !== 1 ? [[name, weights[name]!]] : [])));
+}

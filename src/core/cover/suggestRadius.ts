@@ -13,7 +13,8 @@ export const suggestionMinNodes = 30;
 export const suggestionMaxNodes = 150;
 
 /**
- * Default radius rule: with m complete rows, aim for T = clamp(round(1.5·√m), 30, 150) landmarks.
+ * Default radius rule: with m complete rows, aim for T = clamp(round(1.5·√m), min(30, ⌈m/5⌉), 150)
+ * landmarks (so a small table opens on about one node per five rows, not on one node per two).
  * Take at most 4,000 rows evenly strided through the scaled and weighted table, bisect log(r) (30 steps)
  * between hi = 2 · max distance from the first row (≥ the diameter, so one landmark) and
  * hi / 10⁴, and return the smallest probed radius whose greedy file-order net on those rows
@@ -27,7 +28,7 @@ export function suggestRadius(parsed: ParsedTable, params: RadiusBasis): number 
   const scaled = excludeUndefinedRows(weighted, metric, selection.usedRows).table;
   const m = scaled.rows;
   if (m < 2) return NaN;
-  const target = Math.min(suggestionMaxNodes, Math.max(suggestionMinNodes, Math.round(1.5 * Math.sqrt(m))));
+  const target = Math.min(suggestionMaxNodes, Math.max(Math.min(suggestionMinNodes, Math.ceil(m / 5)), Math.round(1.5 * Math.sqrt(m))));
   const sample = stridedRows(scaled, suggestionSampleSize);
   let far = 0;
   for (let i = 1; i < sample.rows; ++i) far = Math.max(far, metric.distance(sample.values, sample.columns, 0, i));

@@ -1,5 +1,12 @@
 import type { Metric } from "../metric/types.ts";
+import { greedyBalls } from "../search/greedyBalls.ts";
+import { maybeRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { NumericTable } from "../table/types.ts";
+
+export interface NetOptions {
+  /** A candidate index built for this table and metric (createRowIndex), reused across calls. */
+  index?: RowIndex;
+}
 
 /**
  * Greedy ε-net: visit rows in `order`; a row becomes a landmark when no landmark chosen so far
@@ -7,7 +14,8 @@ import type { NumericTable } from "../table/types.ts";
  * of a landmark (it was either covered or chosen), and landmarks are pairwise more than r apart
  * (each was farther than r from all earlier ones).
  * Source: the greedy net construction, e.g. S. Har-Peled, Geometric Approximation Algorithms,
- * AMS 2011, §4.2. O(n·L) distance tests for L landmarks.
+ * AMS 2011, §4.2. O(n·L) distance tests for L landmarks at worst; a candidate index
+ * (search/greedyBalls.ts) skips pairs it proves the predicate rejects.
  * Returns landmark rows (0-based, in the order chosen); an empty table gives none.
  * @example greedyNet({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(0, 1, 2) }, euclidean, 1, Uint32Array.of(0, 1, 2)) // => Uint32Array [0, 2]
  */
@@ -17,21 +25,9 @@ export function greedyNet(
   radius: number,
   order: ArrayLike<number>,
   onProgress?: (done: number, total: number) => void,
+  options: NetOptions = {},
 ): Uint32Array {
   if (!(radius > 0) || !Number.isFinite(radius)) throw new Error(`invalid radius: ${radius}`);
-  const { values, columns: d } = table;
-  const landmarks: number[] = [];
-  for (let k = 0; k < order.length; ++k) {
-    const i = order[k]!;
-    let covered = false;
-    for (let l = 0; l < landmarks.length; ++l) {
-      if (metric.within(values, d, landmarks[l]!, i, radius)) {
-        covered = true;
-        break;
-      }
-    }
-    if (!covered) landmarks.push(i);
-    if (onProgress && (k & 4095) === 4095) onProgress(k + 1, order.length);
-  }
-  return Uint32Array.from(landmarks);
+  const index = maybeRowIndex(table, metric, options.index);
+  return greedyBalls(index, radius, order, { balls: false, ...(onProgress ? { onProgress } : {}) }).landmarks;
 }

@@ -1,3 +1,4 @@
+import { cosineOfSums, rowScale, rowSums } from "./cosineOfSums.ts";
 import type { Metric } from "./types.ts";
 
 /**
@@ -29,19 +30,8 @@ function rowMean(values: Float64Array, d: number, i: number): number {
 }
 
 function correlationDistance(values: Float64Array, d: number, i: number, j: number): number {
-  const a = i * d;
-  const b = j * d;
   const meanX = rowMean(values, d, i);
   const meanY = rowMean(values, d, j);
-  let dot = 0;
-  let xx = 0;
-  let yy = 0;
-  for (let k = 0; k < d; ++k) {
-    const x = values[a + k]! - meanX;
-    const y = values[b + k]! - meanY;
-    dot += x * y;
-    xx += x * x;
-    yy += y * y;
-  }
-  return 1 - dot / Math.sqrt(xx * yy);
+  const [dot, xx, yy] = rowSums(values, d, i, j, meanX, meanY);
+  return cosineOfSums(dot, xx, yy, () => rowSums(values, d, i, j, meanX, meanY, rowScale(values, d, i, meanX), rowScale(values, d, j, meanY)));
 }

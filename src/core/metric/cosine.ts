@@ -1,8 +1,10 @@
+import { cosineOfSums, rowScale, rowSums } from "./cosineOfSums.ts";
 import type { Metric } from "./types.ts";
 
 /**
  * Cosine distance, d(x, y) = 1 − (x·y) / (‖x‖ ‖y‖), with x·y, ‖x‖² and ‖y‖² summed together in
- * column order; within(x, y, r) ⇔ 1 − x·y / √(‖x‖²‖y‖²) ≤ r in Float64.
+ * column order; within(x, y, r) ⇔ 1 − x·y / √(‖x‖²‖y‖²) ≤ r in Float64 (rows of tiny or huge norm
+ * are first divided by their largest |value|, which leaves the cosine unchanged; see cosineOfSums).
  * Not a metric: the triangle inequality fails (x = (1, 0), y = (1, 1), z = (0, 1):
  * d(x, z) = 1 > d(x, y) + d(y, z) = 2 − √2 ≈ 0.586), so no pruning may rely on it.
  * Undefined for a zero row (‖x‖ = 0); such rows are left out of the build and reported.
@@ -23,17 +25,6 @@ export const cosine: Metric = {
 };
 
 function cosineDistance(values: Float64Array, d: number, i: number, j: number): number {
-  const a = i * d;
-  const b = j * d;
-  let dot = 0;
-  let xx = 0;
-  let yy = 0;
-  for (let k = 0; k < d; ++k) {
-    const x = values[a + k]!;
-    const y = values[b + k]!;
-    dot += x * y;
-    xx += x * x;
-    yy += y * y;
-  }
-  return 1 - dot / Math.sqrt(xx * yy);
+  const [dot, xx, yy] = rowSums(values, d, i, j);
+  return cosineOfSums(dot, xx, yy, () => rowSums(values, d, i, j, 0, 0, rowScale(values, d, i), rowScale(values, d, j)));
 }

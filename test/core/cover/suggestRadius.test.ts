@@ -40,3 +40,16 @@ describe("suggestRadius", () => {
     expect(() => suggestRadius(iris, { ...base, features: ["e"] })).toThrow("unknown column: e");
   });
 });
+
+describe("suggestRadius on a small table", () => {
+  it("60 rows on a line aim for ⌈60/5⌉ = 12 landmarks, not the 30 of the large-table floor", async () => {
+    const { suggestRadius: suggest, greedyNet, euclidean, zScore, parseCsvText: parse } = await import("../../../src/core/index.ts");
+    const text = `x\n${Array.from({ length: 60 }, (_, i) => i).join("\n")}\n`;
+    const table = parse(text);
+    const radius = suggest(table, { features: ["x"], metric: "euclidean", scale: "zscore" });
+    const scaled = zScore({ rows: 60, columns: 1, names: ["x"], values: table.columns[0]!.numbers }).table;
+    const order = Uint32Array.from({ length: 60 }, (_, i) => i);
+    expect(greedyNet(scaled, euclidean, radius, order).length).toBeLessThanOrEqual(12); // T = clamp(round(1.5·√60) = 12, min(30, 12), 150), rule in suggestRadius.ts
+    expect(greedyNet(scaled, euclidean, radius * 0.9, order).length).toBeGreaterThan(12 * 0.8); // and not far below it
+  });
+});
