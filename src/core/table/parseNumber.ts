@@ -1,16 +1,37 @@
-// Plain decimal with optional sign, fraction and exponent; hex, "Infinity" and "" are not numbers.
-const decimal = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+import type { DecimalMark } from "./readOptions.ts";
 
-/** Parses one cell as a finite decimal number, or returns NaN (a missing value). */
-export function parseNumber(cell: string): number {
-  const text = cell.trim();
-  if (!decimal.test(text)) return NaN;
-  const value = Number(text);
+// Plain decimal with optional sign, fraction and exponent, surrounded by optional white space
+// (the same set Number() skips); hex, "Infinity" and "" are not numbers.
+const pointDecimal = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
+// The same with a decimal comma; a point anywhere (a thousands separator?) makes it text.
+const commaDecimal = /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/;
+
+/**
+ * Parses one cell as a finite decimal number, or returns NaN (a missing value).
+ * With `decimal` "," the cell must use a comma as its decimal mark ("12,5"); no thousands
+ * separators are read in either mode. Numbers beyond ±1.8e308 are NaN.
+ * @example parseNumber("12,5", ",") // => 12.5
+ */
+export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
+  if (decimal === ",") {
+    if (!commaDecimal.test(cell)) return NaN;
+    const value = Number(cell.replace(",", "."));
+    return Number.isFinite(value) ? value : NaN;
+  }
+  if (!pointDecimal.test(cell)) return NaN;
+  const value = Number(cell);
   return Number.isFinite(value) ? value : NaN;
 }
 
-/** Cells that mean "no value" in common exports (common practice, no source). */
+// Lower-cased cells that mean "no value" in common exports and spreadsheets (common practice, no source).
+// "None" is not one of them: it is often a real level (damage: None, Minor, …).
+const missingTokens = new Set([
+  "", "na", "n/a", "nan", "null", "-", "?",
+  "inf", "+inf", "-inf", "infinity", "+infinity", "-infinity",
+  "#n/a", "#na", "#value!", "#div/0!", "#num!", "#ref!", "#null!", "#name?",
+]);
+
+/** Cells that mean "no value": empty, NA, N/A, NaN, null, -, ?, Inf and spreadsheet error values such as #N/A. */
 export function isMissingToken(cell: string): boolean {
-  const text = cell.trim().toLowerCase();
-  return text === "" || text === "na" || text === "n/a" || text === "nan" || text === "null" || text === "none" || text === "-" || text === "?";
+  return missingTokens.has(cell.trim().toLowerCase());
 }

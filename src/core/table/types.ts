@@ -1,11 +1,32 @@
+/**
+ * What the reader decided a column holds (rules in `finishColumn.ts`):
+ * numeric (at least 95% of the present cells are numbers), categorical (text with repeats and at
+ * most 10,000 levels), identifier (text whose present values are all distinct, or too many
+ * levels to colour by) or empty (every cell missing).
+ */
+export type ColumnType = "numeric" | "categorical" | "identifier" | "empty";
+
+/** Level codes of a categorical column: row i has level `levels[codes[i]]`, or none when `codes[i] === missingCode`. */
+export interface Categories {
+  readonly codes: Uint32Array;
+  /** Distinct present cell texts in order of first appearance. */
+  readonly levels: readonly string[];
+}
+
 /** One column of a parsed table. `numbers` holds NaN wherever a cell is missing or not a number. */
 export interface TableColumn {
   readonly name: string;
+  /** Coarse kind: "numeric" exactly when `type` is "numeric"; every other type is "text". */
   readonly kind: "numeric" | "text";
   readonly numbers: Float64Array;
-  /** Raw cell text, kept for text columns only (ids, categories). */
+  /** Raw cell text, kept for text columns only (ids, categories; "" for an empty cell). */
   readonly texts: readonly string[] | null;
+  /** Cells counted as missing (in a numeric column this includes cells that are not numbers). */
   readonly missing: number;
+  /** The reader's finer type; absent in tables built by hand. */
+  readonly type?: ColumnType;
+  /** Level codes, for categorical columns only. */
+  readonly categories?: Categories;
 }
 
 /**

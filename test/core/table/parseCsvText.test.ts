@@ -40,10 +40,12 @@ describe("parseCsvText", () => {
     expect(column.texts).toEqual(["1", "2", "three"]);
   });
 
-  it("a column with every cell missing is text", () => {
+  it("a column with every cell missing is text of type empty", () => {
     const column = parseCsvText("x,y\nNA,1\n,2\n").columns[0]!;
     expect(column.kind).toBe("text");
+    expect(column.type).toBe("empty");
     expect(column.missing).toBe(2);
+    expect(column.texts).toEqual(["NA", ""]);
   });
 
   it("drops a byte-order mark from the first header name", () => {
@@ -67,12 +69,24 @@ describe("parseCsvText", () => {
     expect(() => parseCsvText("x,y\n")).toThrow("the file has a header but no data records");
   });
 
-  it("throws one error naming the ragged records by their data-record number", () => {
-    expect(() => parseCsvText("a,b\n1,2\n3\n4,5,6\n")).toThrow("ragged records: the header has 2 fields but row 2 has 1 fields, row 3 has 3 fields");
+  it("throws one error naming the ragged records by data-record number and line", () => {
+    // Rows 2 and 3 start on lines 3 and 5: the blank line 4 is not a record (worked by hand).
+    expect(() => parseCsvText("a,b\n1,2\n3\n\n4,5,6\n")).toThrow("ragged records: the header has 2 fields but row 2 has 1 fields, row 3 has 3 fields (lines 3, 5)");
   });
 
   it("lists at most five ragged records and counts the rest", () => {
     const text = `a,b\n${Array.from({ length: 7 }, () => "1").join("\n")}\n`;
-    expect(() => parseCsvText(text)).toThrow(/row 5 has 1 fields and 2 more$/);
+    expect(() => parseCsvText(text)).toThrow(/row 5 has 1 fields and 2 more \(lines 2, 3, 4, 5, 6\)$/);
+  });
+
+  it("a column is numeric when at least 95% of its present cells are numbers: 19 of 20 is numeric, the odd cell missing", () => {
+    const column = parseCsvText(`x\n${[...Array.from({ length: 19 }, (_, i) => String(i)), "oops"].join("\n")}\n`).columns[0]!;
+    expect(column).toMatchObject({ kind: "numeric", type: "numeric", missing: 1, texts: null });
+    expect(column.numbers[19]).toBeNaN();
+  });
+
+  it("18 numbers of 20 present cells (90%) make a text column", () => {
+    const cells = [...Array.from({ length: 18 }, (_, i) => String(i)), "oops", "again"];
+    expect(parseCsvText(`x\n${cells.join("\n")}\n`).columns[0]!.kind).toBe("text");
   });
 });

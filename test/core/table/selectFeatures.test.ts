@@ -26,3 +26,39 @@ describe("selectFeatures", () => {
     expect(() => selectFeatures(parsed, ["label"])).toThrow("not a numeric column: label");
   });
 });
+
+describe("selectFeatures: missing-value report", () => {
+  it("under drop: read 4 = used 2 + dropped 2, rows 2 and 3 (1-based) dropped, one per column", () => {
+    expect(selectFeatures(parsed, ["x", "y"]).missing).toEqual({
+      policy: "drop",
+      read: 4,
+      used: 2,
+      dropped: 2,
+      firstDropped: [2, 3], // parsed rows 1 and 2, counted from 1
+      columns: [
+        { name: "x", missing: 1, dropped: 1, imputed: 0, fill: NaN },
+        { name: "y", missing: 1, dropped: 1, imputed: 0, fill: NaN },
+      ],
+    });
+  });
+
+  it("under median: nothing dropped, one value filled per column with the type-7 median (x of 1,3,4 → 3; y of 10,20,40 → 20)", () => {
+    const { missing, table } = selectFeatures(parsed, ["x", "y"], "median");
+    expect(missing).toMatchObject({ read: 4, used: 4, dropped: 0, firstDropped: [] });
+    expect(missing.columns).toEqual([
+      { name: "x", missing: 1, dropped: 0, imputed: 1, fill: 3 }, // worked by hand
+      { name: "y", missing: 1, dropped: 0, imputed: 1, fill: 20 }, // worked by hand
+    ]);
+    assertClose(table.values, [1, 10, 3, 20, 3, 20, 4, 40]);
+  });
+
+  it("lists at most ten dropped rows", () => {
+    const text = `x\n${Array.from({ length: 15 }, () => "NA").join("\n")}\n1\n2\n`;
+    const { missing } = selectFeatures(parseCsvText(text), ["x"]);
+    expect(missing).toMatchObject({ read: 17, used: 2, dropped: 15, firstDropped: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10] });
+  });
+
+  it("an all-missing (empty) column cannot be a feature", () => {
+    expect(() => selectFeatures(parseCsvText("x,y\nNA,1\n,2\n"), ["x"])).toThrow("column has no values: x");
+  });
+});

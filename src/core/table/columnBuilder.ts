@@ -1,0 +1,154 @@
+import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
+import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
+import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
+
+/** Raw code of an empty cell: not a dictionary entry. */
+export const emptyCode = 0xffffffff;
+
+/**
+ * Accumulates one column while the records stream by, without holding the records. Every cell
+ * is parsed once into `numbers` (NaN unless a number). The cell texts are kept in the cheapest
+ * form that may still be needed:
+ * - "dictionary" while at most 10,000 distinct texts: a level per row (repeats parse once);
+ * - then "list" (every text) if the column looks like text, or "sparse" (only the cells that
+ *   are not numbers) if at least 95% of its present cells are numbers, so a long numeric column
+ *   costs 8 bytes a row; a "list" column turns "sparse" when it comes to look numeric
+ *   (checked every 4,096 rows);
+ * - "numbers" (no text at all) for Parquet number columns.
+ */
+export class ColumnBuilder {
+  rows = 0;
+  readonly numbers = new GrowableFloat64();
+  empty = 0;
+  tokens = 0;
+  notNumbers = 0;
+  numeric = 0;
+  min = Infinity;
+  max = -Infinity;
+  dictionary: Map<string, number> | null;
+  rawLevels: string[] = [];
+  levelValues: number[] = [];
+  levelKinds: CellKind[] = [];
+  rawCodes: GrowableUint32 | null;
+  list: string[] | null = null;
+  sparseRows: GrowableUint32 | null = null;
+  sparseTexts: string[] | null = null;
+  /** Distinct numbers outside dictionary mode, up to the cap. */
+  numberSet: Set<number> | null = null;
+  readonly firstValues: string[] = [];
+  readonly firstNumbers: string[] = [];
+  readonly firstTokens: KeptCell[] = [];
+  readonly firstNotNumbers: KeptCell[] = [];
+
+  constructor(readonly decimal: DecimalMark, numbersOnly = false) {
+    this.dictionary = numbersOnly ? null : new Map();
+    this.rawCodes = numbersOnly ? null : new GrowableUint32();
+    if (numbersOnly) this.numberSet = new Set();
+  }
+
+  /** Adds the next cell of the column, read from the record that starts on `line` (0: no line). */
+  push(cell: string, line: number): void {
+    const row = this.rows++;
+    if (this.dictionary) {
+      let code = cell === "" ? emptyCode : this.dictionary.get(cell);
+      if (code === undefined) {
+        code = this.rawLevels.length;
+        const text = detach(cell);
+        const kind = cellKind(text, this.decimal);
+        this.dictionary.set(text, code);
+        this.rawLevels.push(text);
+        this.levelKinds.push(kind.kind);
+        this.levelValues.push(kind.value);
+      }
+      this.rawCodes!.push(code);
+      if (code === emptyCode) this.count(CellKind.blank, NaN, cell, row, line);
+      else this.count(this.levelKinds[code]!, this.levelValues[code]!, cell, row, line);
+      if (this.rawLevels.length > distinctCap) this.leaveDictionary();
+      return;
+    }
+    const { kind, value } = cellKind(cell, this.decimal);
+    this.count(kind, value, cell, row, line);
+    if (this.list) this.list.push(detach(cell));
+    else if (this.sparseRows && (kind === CellKind.token || kind === CellKind.text)) {
+      this.sparseRows.push(row);
+      this.sparseTexts!.push(detach(cell));
+    }
+    if (this.list && (row & 4095) === 4095 && this.looksNumeric()) this.leaveList();
+  }
+
+  /** Adds a number read as a number (Parquet); NaN and ±Infinity count as missing tokens. */
+  pushNumber(value: number): void {
+    const finite = Number.isFinite(value);
+    this.count(finite ? CellKind.number : CellKind.token, finite ? value : NaN, String(value), this.rows++, 0);
+  }
+
+  /** Adds an empty cell (a Parquet null). */
+  pushEmpty(): void {
+    this.push("", 0);
+  }
+
+  looksNumeric(): boolean {
+    return this.numeric > 0 && this.numeric >= numericShare * (this.numeric + this.notNumbers);
+  }
+
+  private count(kind: CellKind, value: number, cell: string, row: number, line: number): void {
+    this.numbers.push(value);
+    if (kind === CellKind.number) {
+      this.numeric++;
+      if (value < this.min) this.min = value;
+      if (value > this.max) this.max = value;
+      if (this.firstNumbers.length < shownCells) this.firstNumbers.push(detach(cell));
+      if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+    } else if (kind === CellKind.blank) {
+      this.empty++;
+      return;
+    } else if (kind === CellKind.token) {
+      this.tokens++;
+      if (this.firstTokens.length < shownCells) this.firstTokens.push({ row, line, text: detach(cell) });
+      return;
+    } else {
+      this.notNumbers++;
+      if (this.firstNotNumbers.length < shownCells) this.firstNotNumbers.push({ row, line, text: detach(cell) });
+    }
+    if (this.firstValues.length < shownCells) this.firstValues.push(detach(cell));
+  }
+
+  // More distinct texts than the cap: keep a list of texts, or only the non-number cells.
+  private leaveDictionary(): void {
+    const codes = this.rawCodes!;
+    this.numberSet = new Set(this.levelValues.filter((x) => x === x).slice(0, distinctCap));
+    if (this.looksNumeric()) {
+      this.sparseRows = new GrowableUint32();
+      this.sparseTexts = [];
+      for (let r = 0; r < this.rows; ++r) {
+        const code = codes.get(r);
+        const kind = code === emptyCode ? CellKind.blank : this.levelKinds[code];
+        if (kind !== CellKind.token && kind !== CellKind.text) continue;
+        this.sparseRows.push(r);
+        this.sparseTexts.push(this.rawLevels[code]!);
+      }
+    } else {
+      this.list = new Array<string>(this.rows);
+      for (let r = 0; r < this.rows; ++r) this.list[r] = codes.get(r) === emptyCode ? "" : this.rawLevels[codes.get(r)]!;
+    }
+    this.dictionary = null;
+    this.rawCodes = null;
+    this.rawLevels = [];
+    this.levelKinds = [];
+    this.levelValues = [];
+  }
+
+  // A text-looking column that came to look numeric: keep only its non-number cells.
+  private leaveList(): void {
+    const list = this.list!;
+    this.sparseRows = new GrowableUint32();
+    this.sparseTexts = [];
+    for (let r = 0; r < list.length; ++r) {
+      const { kind } = cellKind(list[r]!, this.decimal);
+      if (kind !== CellKind.token && kind !== CellKind.text) continue;
+      this.sparseRows.push(r);
+      this.sparseTexts.push(list[r]!);
+    }
+    this.list = null;
+  }
+}

@@ -1,0 +1,57 @@
+import { ColumnBuilder } from "./columnBuilder.ts";
+import { shownCells, type DecimalMark } from "./readOptions.ts";
+
+/** A record whose field count differs from the header's: 1-based row and line, field count. */
+export interface RaggedRecord {
+  readonly row: number;
+  readonly line: number;
+  readonly fields: number;
+}
+
+/**
+ * The reader's record-by-record state: line numbers, the header, one column builder per header
+ * field, and the first ragged and malformed records. Blank lines are not records; a record starts
+ * on `line` and takes one line plus the line breaks inside its fields.
+ */
+export class RecordSink {
+  /** The 1-based line on which the next record starts. */
+  line = 1;
+  rows = 0;
+  header: string[] | null = null;
+  builders: ColumnBuilder[] = [];
+  readonly ragged: RaggedRecord[] = [];
+  raggedCount = 0;
+  readonly malformed: { row: number; line: number }[] = [];
+  malformedCount = 0;
+
+  constructor(private readonly decimal: DecimalMark) {}
+
+  /** Takes the complete records of one chunk (see ChunkParser). */
+  take(records: readonly string[][], malformed: readonly number[], mayHoldLineBreaks: boolean): void {
+    for (let k = 0; k < records.length; ++k) {
+      const record = records[k]!;
+      const line = this.line;
+      this.line += mayHoldLineBreaks ? lineCount(record) : 1;
+      if (record.length === 1 && record[0] === "") continue;
+      if (this.header === null) {
+        this.header = record;
+        this.builders = record.map(() => new ColumnBuilder(this.decimal));
+        continue;
+      }
+      const row = ++this.rows;
+      const builders = this.builders;
+      const width = builders.length;
+      if (record.length !== width && this.raggedCount++ < shownCells) this.ragged.push({ row, line, fields: record.length });
+      for (let j = 0; j < width; ++j) builders[j]!.push(record[j] ?? "", line);
+      if (malformed.length > 0 && malformed.includes(k) && this.malformedCount++ < shownCells) this.malformed.push({ row, line });
+    }
+  }
+}
+
+function lineCount(record: readonly string[]): number {
+  let lines = 1;
+  for (const field of record) {
+    for (let at = field.indexOf("\n"); at !== -1; at = field.indexOf("\n", at + 1)) lines++;
+  }
+  return lines;
+}
