@@ -1,0 +1,77 @@
+import { maybeLandmarkRule, maybeMetric, maybeMissingPolicy, maybeScale, parseNumber, type CoverParams, type ParsedTable } from "../core/index.ts";
+
+/** The data and landmark options every headless command shares, as node:util parseArgs options. */
+export const commonOptionSpec = {
+  columns: { type: "string" },
+  id: { type: "string" },
+  outcome: { type: "string" },
+  scale: { type: "string", default: "zscore" },
+  metric: { type: "string", default: "euclidean" },
+  landmarks: { type: "string", default: "greedy" },
+  seed: { type: "string", default: "1" },
+  missing: { type: "string", default: "drop" },
+  weights: { type: "string" },
+} as const;
+
+export const commonUsage = `  --columns a,b,c     feature columns (default: every numeric column but the id and outcomes)
+  --id COLUMN         row label column (never a feature)
+  --outcome a,b       outcome columns (never features)
+  --scale S           none | zscore | minmax | robust (default zscore)
+  --metric M          euclidean | manhattan | chebyshev | cosine | correlation (default euclidean)
+  --landmarks L       greedy (file order) | random (seeded order) | maximin (default greedy)
+  --seed N            integer seed for random and maximin (default 1)
+  --missing P         drop | median | mean: rows with a missing feature value (default drop)
+  --weights a=2,b=0.5 factor per feature after scaling (default 1)`;
+
+export interface CommonOptions {
+  /** Feature columns, or null for every numeric column except the id and outcomes. */
+  readonly columns: readonly string[] | null;
+  readonly idColumn: string | null;
+  readonly outcomes: readonly string[];
+  readonly params: Omit<CoverParams, "features" | "radius">;
+}
+
+/** Comma-separated names, trimmed, empty ones dropped. */
+export function listOption(text: string | undefined): string[] {
+  return (text ?? "").split(",").map((s) => s.trim()).filter((s) => s !== "");
+}
+
+/** Checks and normalizes the shared options (numbers by parseNumber, as the table's cells); throws one clear message for anything wrong. */
+export function readCommonOptions(values: { readonly [K in keyof typeof commonOptionSpec]?: string | undefined }): CommonOptions {
+  const seed = parseNumber(values.seed ?? "1");
+  if (!Number.isInteger(seed)) throw new Error(`invalid seed: ${values.seed}`);
+  return {
+    columns: values.columns === undefined ? null : listOption(values.columns),
+    idColumn: values.id ?? null,
+    outcomes: listOption(values.outcome),
+    params: {
+      scale: maybeScale(values.scale ?? "zscore"),
+      metric: maybeMetric(values.metric ?? "euclidean").name,
+      landmarks: maybeLandmarkRule(values.landmarks ?? "greedy"),
+      seed,
+      missing: maybeMissingPolicy(values.missing ?? "drop"),
+      weights: parseWeights(listOption(values.weights)),
+    },
+  };
+}
+
+/** The feature columns for a parsed table: the named ones (each must exist), else every numeric column but the id and outcomes. */
+export function resolveFeatures(table: ParsedTable, options: CommonOptions): string[] {
+  for (const name of [...(options.columns ?? []), ...options.outcomes, ...(options.idColumn ? [options.idColumn] : [])]) {
+    if (!table.columns.some((c) => c.name === name)) throw new Error(`unknown column: ${name}`);
+  }
+  if (options.columns) return [...options.columns];
+  return table.columns.filter((c) => c.kind === "numeric" && c.name !== options.idColumn && !options.outcomes.includes(c.name)).map((c) => c.name);
+}
+
+function parseWeights(pairs: readonly string[]): Record<string, number> {
+  const weights: Record<string, number> = {};
+  for (const pair of pairs) {
+    const at = pair.lastIndexOf("=");
+    const name = pair.slice(0, at).trim();
+    const weight = parseNumber(pair.slice(at + 1));
+    if (at <= 0 || !(weight >= 0)) throw new Error(`invalid weight: ${pair}`);
+    weights[name] = weight;
+  }
+  return weights;
+}

@@ -1,0 +1,48 @@
+import { rename, rm, writeFile } from "node:fs/promises";
+import { csvLine, csvNumber, radiusSweep, type RadiusSweep } from "../core/index.ts";
+import { resolveFeatures } from "./commonOptions.ts";
+import type { SweepCommand } from "./parseSweepArgs.ts";
+import { readInput } from "./readInput.ts";
+
+export const sweepColumns = ["radius", "nodes", "edges", "b0", "b1", "cycle_rank", "balls_per_row", "largest_node_share", "largest_component_share", "plateau", "suggested"];
+
+/**
+ * Runs a radius sweep over the table and returns the text for standard output: the per-radius
+ * CSV, or with --out a one-line summary after the CSV is written next to the destination and
+ * moved into place, so that a failure leaves nothing half written.
+ */
+export async function runSweep(command: SweepCommand): Promise<string> {
+  const { table } = await readInput(command.input, command.read);
+  const features = resolveFeatures(table, command);
+  const sweep = radiusSweep(table, { ...command.params, features }, {
+    steps: command.steps,
+    ...(command.radiusMin === null ? {} : { radiusMin: command.radiusMin }),
+    ...(command.radiusMax === null ? {} : { radiusMax: command.radiusMax }),
+  });
+  const csv = sweepCsv(sweep);
+  if (command.outFile === null) return csv;
+  const staging = `${command.outFile}.partial-${process.pid}`;
+  try {
+    await writeFile(staging, csv);
+    await rename(staging, command.outFile);
+  } catch (error) {
+    await rm(staging, { force: true });
+    throw new Error(`cannot write ${command.outFile}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+  }
+  const { suggestion } = sweep;
+  const suggested = suggestion ? `suggested radius ${suggestion.radius} (b0 ${suggestion.plateau.b0}, b1 ${suggestion.plateau.b1})` : "no suggested radius";
+  return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${suggested}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;
+}
+
+/** The per-radius table: one line per radius, ascending; `plateau` numbers the runs of unchanged b0, b1 from 1; `suggested` is 1 on the suggested radius. */
+export function sweepCsv(sweep: RadiusSweep): string {
+  const f = sweep.figures;
+  const plateauOf = new Uint32Array(f.radius.length);
+  sweep.plateaus.forEach((p, j) => plateauOf.fill(j + 1, p.first, p.last + 1));
+  let out = csvLine(sweepColumns);
+  for (let k = 0; k < f.radius.length; ++k) {
+    const row = [f.radius[k]!, f.nodes[k]!, f.edges[k]!, f.b0[k]!, f.b1[k]!, f.cycleRank[k]!, f.ballsPerRow[k]!, f.largestNodeShare[k]!, f.largestComponentShare[k]!, plateauOf[k]!, sweep.suggestion?.index === k ? 1 : 0];
+    out += csvLine(row.map(csvNumber));
+  }
+  return out;
+}

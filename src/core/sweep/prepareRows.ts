@@ -1,0 +1,53 @@
+import { excludeUndefinedRows } from "../cover/excludeUndefinedRows.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "../cover/params.ts";
+import { maybeMetric } from "../metric/metrics.ts";
+import type { Metric } from "../metric/types.ts";
+import { scaleTable } from "../scale/scaleTable.ts";
+import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
+import { selectFeatures } from "../table/selectFeatures.ts";
+import type { NumericTable, ParsedTable } from "../table/types.ts";
+
+/** Every cover parameter but the radius: what a sweep holds fixed. */
+export type SweepParams = Omit<CoverParams, "radius">;
+
+/** The rows of a build, selected, scaled and weighted once, ready for any radius. */
+export interface PreparedRows {
+  readonly metric: Metric;
+  /** Row-major scaled and weighted features of the rows that enter the build. */
+  readonly table: NumericTable;
+  /** Parsed-table row of each row of `table`, ascending. */
+  readonly usedRows: Uint32Array;
+  readonly droppedRows: Uint32Array;
+  readonly undefinedRows: Uint32Array;
+  readonly imputed: Readonly<Record<string, number>>;
+  readonly constantColumns: readonly string[];
+  /** Candidate index over `table` under `metric`, built once and shared by every radius. */
+  readonly index: RowIndex;
+}
+
+/**
+ * The radius-free first half of buildCover, in the same order and by the same functions: select
+ * the features under the missing-value policy, scale and weight, leave out rows where the metric
+ * is undefined, and build the candidate index (search/rowIndex.ts) that buildCover builds per
+ * call. Checks every parameter but the radius. O(n log n · d).
+ */
+export function prepareRows(parsed: ParsedTable, params: SweepParams): PreparedRows {
+  const metric = maybeMetric(params.metric);
+  maybeScale(params.scale);
+  maybeLandmarkRule(params.landmarks);
+  const missing = maybeMissingPolicy(params.missing ?? "drop");
+  if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
+  const selection = selectFeatures(parsed, params.features, missing);
+  const scaled = scaleTable(selection.table, params.scale, params.weights);
+  const defined = excludeUndefinedRows(scaled.table, metric, selection.usedRows);
+  return {
+    metric,
+    table: defined.table,
+    usedRows: defined.usedRows,
+    droppedRows: selection.droppedRows,
+    undefinedRows: defined.undefinedRows,
+    imputed: selection.imputed,
+    constantColumns: scaled.constantColumns,
+    index: createRowIndex(defined.table, metric),
+  };
+}

@@ -1,0 +1,110 @@
+import type { ParsedTable } from "../table/types.ts";
+import type { RunControl } from "./runControl.ts";
+import { coverFigures } from "./coverFigures.ts";
+import type { SweepCover } from "./coverFromBalls.ts";
+import { defaultRange, defaultRangeRule } from "./defaultRange.ts";
+import { ascendingRadii, logSpacedRadii } from "./logSpacedRadii.ts";
+import type { Balls } from "./netWithBalls.ts";
+import { plateaus, type Plateau } from "./plateaus.ts";
+import { prepareRows, type PreparedRows, type SweepParams } from "./prepareRows.ts";
+import { suggestionRule, suggestStart, type StartSuggestion } from "./suggestStart.ts";
+import { sweepCovers } from "./sweepCovers.ts";
+import { emptyFigures, setFigures, type SweepFigures } from "./sweepFigures.ts";
+
+export const defaultSweepSteps = 24; // issue 6
+
+export interface SweepOptions extends RunControl {
+  /** Explicit radii (any order, duplicates dropped); when given, radiusMin, radiusMax and steps are ignored. */
+  readonly radii?: ArrayLike<number>;
+  /** Ends of a log-spaced sweep; an end left out comes from the default range rule. */
+  readonly radiusMin?: number;
+  readonly radiusMax?: number;
+  /** Number of log-spaced radii, at least 2 (default 24). */
+  readonly steps?: number;
+  /** Receives each radius's whole cover (index into the ascending radii) and its balls in prepared-table rows. */
+  readonly onCover?: (index: number, cover: SweepCover, balls: Balls) => void;
+  /** Clock for `timings` (core has no `performance`); default Date.now. */
+  readonly now?: () => number;
+}
+
+export interface RadiusSweep {
+  readonly params: SweepParams;
+  readonly rowsRead: number;
+  readonly rowsUsed: number;
+  /** The swept range; `rule` states the default range rule when an end came from it, else null. */
+  readonly range: { readonly min: number; readonly max: number; readonly rule: string | null };
+  readonly figures: SweepFigures;
+  /** Runs of consecutive radii with unchanged b0 and b1, ascending. */
+  readonly plateaus: readonly Plateau[];
+  readonly suggestion: StartSuggestion | null;
+  readonly suggestionRule: string;
+  /** Milliseconds by `now`: selecting, scaling and indexing the rows, finding the default range, building the covers. */
+  readonly timings: { readonly prepare: number; readonly range: number; readonly covers: number };
+}
+
+/**
+ * Radius-stability sweep: the cover graph at each of a list of radii, with the figures of each
+ * (nodes, edges, b0, b1, cycle rank, balls per row, largest node's and largest component's shares
+ * of the rows), its plateaus of unchanged (b0, b1) and a suggested starting radius. Every
+ * radius's graph equals buildCover's at that radius; rows are scaled and indexed once, maximin
+ * nets are prefixes of one farthest-point order, and b1 is found by a faster exact route
+ * (sweepCovers.ts). Default radii: 24 log-spaced over the default range (defaultRange.ts).
+ * Progress goes to `onProgress`; `shouldStop` is asked between radii and inside long loops and
+ * stops the run with core's Cancelled error (cancel.ts). Cost: see sweepCovers.
+ * @example radiusSweep(24 points evenly on a circle, { features: ["x", "y"], scale: "none", … }, { radii: logSpacedRadii(0.05, 3, 24) }).figures.b1[10] // => 1
+ */
+export function radiusSweep(parsed: ParsedTable, params: SweepParams, options: SweepOptions = {}): RadiusSweep {
+  const now = options.now ?? Date.now;
+  const started = now();
+  const prepared = prepareRows(parsed, params);
+  return sweepPrepared(prepared, parsed.rows, params, options, now() - started);
+}
+
+/** radiusSweep on rows already prepared (prepareRows) from a table of `rowsRead` rows, which took `prepareTime` ms. */
+export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: SweepParams, options: SweepOptions = {}, prepareTime = 0): RadiusSweep {
+  const { now = Date.now, onCover, onProgress, shouldStop } = options;
+  const started = now();
+  const part = (from: number, span: number): RunControl => ({
+    ...(shouldStop ? { shouldStop } : {}),
+    onProgress: (fraction) => onProgress?.(from + span * fraction),
+  });
+  let rule: string | null = null;
+  let radii: Float64Array;
+  let rangeShare = 0;
+  if (options.radii) radii = ascendingRadii(options.radii);
+  else {
+    let { radiusMin: min, radiusMax: max } = options;
+    if (min === undefined || max === undefined) {
+      rangeShare = 0.1;
+      const found = defaultRange(prepared, part(0, rangeShare));
+      min ??= found.min;
+      max ??= found.max;
+      rule = defaultRangeRule;
+    }
+    radii = logSpacedRadii(min, max, options.steps ?? defaultSweepSteps);
+  }
+  const rangeTime = now() - started;
+  const figures = emptyFigures(radii);
+  sweepCovers(
+    prepared,
+    radii,
+    params.landmarks,
+    params.seed,
+    (k, cover, balls) => {
+      setFigures(figures, k, coverFigures(cover, balls.rowNodes));
+      onCover?.(k, cover, balls);
+    },
+    part(rangeShare, 1 - rangeShare),
+  );
+  return {
+    params: { ...params, features: [...params.features] },
+    rowsRead,
+    rowsUsed: prepared.table.rows,
+    range: { min: radii[0]!, max: radii[radii.length - 1]!, rule },
+    figures,
+    plateaus: plateaus(radii, figures.b0, figures.b1),
+    suggestion: suggestStart(radii, figures),
+    suggestionRule,
+    timings: { prepare: prepareTime, range: rangeTime, covers: now() - started - rangeTime },
+  };
+}

@@ -1,0 +1,38 @@
+import { plateaus, type Plateau } from "./plateaus.ts";
+
+export const suggestionFewestNodes = 5; // "at least five nodes" (issue 6)
+export const suggestionLargestShare = 0.5; // "no single node holds more than half the rows" (issue 6)
+
+export const suggestionRule =
+  "the middle radius of the widest run of sweep radii with unchanged b0 and b1 (width in log r, each radius counting halfway to its neighbours; " +
+  "ties to the smaller radii), counting only radii where the graph has at least 5 nodes and no node holds more than half the rows";
+
+export interface StartSuggestion {
+  readonly radius: number;
+  /** Index of the radius in the sweep (ascending). */
+  readonly index: number;
+  /** The eligible run it comes from. */
+  readonly plateau: Plateau;
+}
+
+/**
+ * Suggested starting radius (rule in `suggestionRule`): among radii with nodes ≥ 5 and largest
+ * node share ≤ 1/2, the plateaus of unchanged (b0, b1); the widest in log-radius wins (ties to
+ * the lower one); its radius nearest the run's middle in log r (ties to the smaller). Null when
+ * no radius qualifies. O(K).
+ * @example suggestStart([1, 2, 4, 8], nodes [40, 20, 9, 4], shares [0.1, 0.2, 0.3, 0.6], b0 [1, 1, 1, 1], b1 [1, 1, 1, 0]) // => { radius: 2, index: 1 } (eligible run 0..2)
+ */
+export function suggestStart(
+  radii: ArrayLike<number>,
+  figures: { readonly nodes: ArrayLike<number>; readonly largestNodeShare: ArrayLike<number>; readonly b0: ArrayLike<number>; readonly b1: ArrayLike<number> },
+): StartSuggestion | null {
+  const eligible = (k: number): boolean => figures.nodes[k]! >= suggestionFewestNodes && figures.largestNodeShare[k]! <= suggestionLargestShare;
+  let best: Plateau | null = null;
+  for (const run of plateaus(radii, figures.b0, figures.b1, eligible)) if (!best || run.logWidth > best.logWidth) best = run;
+  if (!best) return null;
+  const lower = best.first > 0 ? Math.sqrt(radii[best.first - 1]! * radii[best.first]!) : radii[best.first]!;
+  const middle = Math.log(lower) + best.logWidth / 2;
+  let index = best.first;
+  for (let k = best.first + 1; k <= best.last; ++k) if (Math.abs(Math.log(radii[k]!) - middle) < Math.abs(Math.log(radii[index]!) - middle)) index = k;
+  return { radius: radii[index]!, index, plateau: best };
+}
