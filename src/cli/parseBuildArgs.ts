@@ -1,61 +1,31 @@
-import { parseArgs } from "node:util";
-import { maybeLandmarkRule, maybeMetric, maybeScale, type CoverParams } from "../core/index.ts";
+import { parseNumber, type ByteReadOptions } from "../core/index.ts";
+import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
+import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
+import { strictArgs } from "./strictArgs.ts";
 
-export interface BuildCommand {
+export interface BuildCommand extends CommonOptions {
   readonly input: string;
   readonly outDir: string;
-  /** Feature columns, or null for every numeric column except the id and outcomes. */
-  readonly columns: readonly string[] | null;
-  readonly idColumn: string | null;
-  readonly outcomes: readonly string[];
   /** Radius, or null for the default rule. */
   readonly radius: number | null;
-  readonly params: Omit<CoverParams, "features" | "radius">;
+  readonly read: ByteReadOptions;
 }
 
-export const buildUsage = `usage: shoal build DATA.csv --out DIR [--columns a,b,c] [--id COLUMN] [--outcome a,b]
-  [--scale zscore] [--metric euclidean] [--radius R] [--landmarks greedy|random] [--seed N]`;
+export const buildUsage = `usage: shoal build DATA.csv --out DIR [options]
+  --out DIR           folder for nodes.csv, members.csv, edges.csv and summary.json
+  --radius R          ball radius (default: the workbench's default-radius rule)
+${commonUsage}
+${readUsage}`;
 
 /** Parses `shoal build …` arguments; throws one clear message for anything wrong. */
 export function parseBuildArgs(args: readonly string[]): BuildCommand {
-  const { values, positionals } = parseArgs({
-    args: [...args],
-    allowPositionals: true,
-    strict: true,
-    options: {
-      out: { type: "string" },
-      columns: { type: "string" },
-      id: { type: "string" },
-      outcome: { type: "string" },
-      scale: { type: "string", default: "zscore" },
-      metric: { type: "string", default: "euclidean" },
-      radius: { type: "string" },
-      landmarks: { type: "string", default: "greedy" },
-      seed: { type: "string", default: "1" },
-    },
-  });
+  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" } });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out DIR");
-  const list = (text: string | undefined): string[] => (text ?? "").split(",").map((s) => s.trim()).filter((s) => s !== "");
   let radius: number | null = null;
   if (values.radius !== undefined) {
-    radius = Number(values.radius);
-    if (!(radius > 0) || !Number.isFinite(radius)) throw new Error(`invalid radius: ${values.radius}`);
+    radius = parseNumber(values.radius);
+    if (!(radius > 0)) throw new Error(`invalid radius: ${values.radius}`);
   }
-  const seed = Number(values.seed);
-  if (!Number.isInteger(seed)) throw new Error(`invalid seed: ${values.seed}`);
-  return {
-    input: positionals[0]!,
-    outDir: values.out,
-    columns: values.columns === undefined ? null : list(values.columns),
-    idColumn: values.id ?? null,
-    outcomes: list(values.outcome),
-    radius,
-    params: {
-      scale: maybeScale(values.scale ?? "zscore"),
-      metric: maybeMetric(values.metric ?? "euclidean").name,
-      landmarks: maybeLandmarkRule(values.landmarks ?? "greedy"),
-      seed,
-    },
-  };
+  return { ...readCommonOptions(values), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values) };
 }

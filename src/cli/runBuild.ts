@@ -1,7 +1,9 @@
-import { mkdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
-import { basename, join } from "node:path";
-import { buildCover, coverExports, parseCsvText, suggestRadius, type ParsedTable } from "../core/index.ts";
+import { mkdir, rename, rm, stat, writeFile } from "node:fs/promises";
+import { join } from "node:path";
+import { buildCover, coverExports, featureWeights, suggestRadius, type CoverParams } from "../core/index.ts";
+import { resolveFeatures } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
+import { readInput } from "./readInput.ts";
 
 /**
  * Reads the table through the same core parser as the workbench, builds, and writes the same
@@ -9,37 +11,48 @@ import type { BuildCommand } from "./parseBuildArgs.ts";
  * are moved into place only when all are written, so a failure leaves nothing half written.
  */
 export async function runBuild(command: BuildCommand): Promise<string> {
-  const [text, info] = await Promise.all([readFile(command.input, "utf8"), stat(command.input)]).catch(() => {
-    throw new Error(`cannot read input file: ${command.input}`);
-  });
-  const table = parseCsvText(text);
-  for (const name of [...(command.columns ?? []), ...command.outcomes, ...(command.idColumn ? [command.idColumn] : [])]) {
-    if (!table.columns.some((c) => c.name === name)) throw new Error(`unknown column: ${name}`);
+  const { table, fileName, fileSize } = await readInput(command.input, command.read);
+  const features = resolveFeatures(table, command);
+  for (const name of command.outcomes) {
+    if (table.columns.find((c) => c.name === name)!.kind !== "numeric") throw new Error(`not a numeric column: ${name}`);
   }
-  const features = command.columns ?? defaultFeatures(table, command);
-  const radius = command.radius ?? suggestRadius(table, { features, metric: command.params.metric, scale: command.params.scale });
+  const { scale, metric, landmarks, seed } = command.params;
+  const missing = command.params.missing ?? "drop";
+  const weights = featureWeights(features, command.params.weights ?? {});
+  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights });
   if (!(radius > 0)) throw new Error("no default radius: the rows do not differ in the chosen columns");
+  // the same key order as the workbench's parameters, so both summaries read alike
+  const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights };
   const started = performance.now();
-  const result = buildCover(table, { ...command.params, features, radius }, { now: () => performance.now() });
+  const result = buildCover(table, params, { now: () => performance.now() });
   const elapsed = performance.now() - started;
-  const files = coverExports(table, result, { fileName: basename(command.input), fileSize: info.size, idColumn: command.idColumn, outcomes: command.outcomes });
+  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes });
   const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
 
-  const staging = `${command.outDir}.partial-${process.pid}`;
-  await rm(staging, { recursive: true, force: true });
-  await mkdir(staging, { recursive: true });
-  await Promise.all([
-    writeFile(join(staging, "nodes.csv"), files["nodes.csv"]),
-    writeFile(join(staging, "members.csv"), files["members.csv"]),
-    writeFile(join(staging, "edges.csv"), files["edges.csv"]),
-    writeFile(join(staging, "summary.json"), `${JSON.stringify(summary, null, 2)}\n`),
-  ]);
-  await mkdir(command.outDir, { recursive: true });
-  for (const name of ["nodes.csv", "members.csv", "edges.csv", "summary.json"]) await rename(join(staging, name), join(command.outDir, name));
-  await rm(staging, { recursive: true, force: true });
-  return `${result.landmarks.length} nodes, ${result.edges.source.length} edges, ${result.componentCount} components at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}; wrote ${command.outDir}`;
+  await writeAll(command.outDir, {
+    "nodes.csv": files["nodes.csv"],
+    "members.csv": files["members.csv"],
+    "edges.csv": files["edges.csv"],
+    "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
+  });
+  const loops = result.betti ? `, b0 ${result.betti.b0}, b1 ${result.betti.b1}` : "";
+  return `${result.landmarks.length} nodes, ${result.edges.source.length} edges, ${result.componentCount} components, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}; wrote ${command.outDir}`;
 }
 
-function defaultFeatures(table: ParsedTable, command: BuildCommand): string[] {
-  return table.columns.filter((c) => c.kind === "numeric" && c.name !== command.idColumn && !command.outcomes.includes(c.name)).map((c) => c.name);
+/** Writes every file to a staging folder beside `outDir`, then moves them in; on any failure the staging folder is removed. */
+export async function writeAll(outDir: string, files: Readonly<Record<string, string>>): Promise<void> {
+  const existing = await stat(outDir).catch(() => null);
+  if (existing && !existing.isDirectory()) throw new Error(`output path is not a folder: ${outDir}`);
+  const staging = `${outDir}.partial-${process.pid}`;
+  try {
+    await rm(staging, { recursive: true, force: true });
+    await mkdir(staging, { recursive: true });
+    await Promise.all(Object.entries(files).map(([name, text]) => writeFile(join(staging, name), text)));
+    await mkdir(outDir, { recursive: true });
+    for (const name of Object.keys(files)) await rename(join(staging, name), join(outDir, name));
+  } catch (error) {
+    throw new Error(`cannot write to ${outDir}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+  } finally {
+    await rm(staging, { recursive: true, force: true });
+  }
 }

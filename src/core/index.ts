@@ -1,7 +1,31 @@
-export type { NumericTable, ParsedTable, TableColumn } from "./table/types.ts";
+export type { NumericTable, ParsedTable, TableColumn, Categories, ColumnType } from "./table/types.ts";
+export { createTableReader, type TableReader } from "./table/createTableReader.ts";
+export { readTableText } from "./table/readTableText.ts";
+export { readTableBytes, readChunkBytes, type ByteSource, type ByteReadOptions, type ByteReadControl, type Utf8Decoder } from "./table/readTableBytes.ts";
+export {
+  delimiters,
+  maxInputBytes,
+  distinctCap,
+  numericShare,
+  maybeDelimiter,
+  maybeDecimalMark,
+  maybeRaggedPolicy,
+  type Delimiter,
+  type DecimalMark,
+  type RaggedPolicy,
+  type ReadOptions,
+} from "./table/readOptions.ts";
+export type { ReadOutcome, TableReport, ColumnReport, FlaggedCell, Notice, TableFormat } from "./table/tableReport.ts";
+export { checkInputSize } from "./table/checkInputSize.ts";
+export { oneHot } from "./table/oneHot.ts";
+export { categoryCounts, majorityLevel } from "./table/categoryCounts.ts";
+export { detectEncoding, maybeEncoding, encodingProbeBytes, type TextEncodingName } from "./encoding/detectEncoding.ts";
+export { decodeWindows1252 } from "./encoding/decodeWindows1252.ts";
+export { readParquet } from "./parquet/readParquet.ts";
+export { isParquet } from "./parquet/isParquet.ts";
 export { parseCsvText } from "./table/parseCsvText.ts";
 export { parseNumber, isMissingToken } from "./table/parseNumber.ts";
-export { selectFeatures, type FeatureSelection } from "./table/selectFeatures.ts";
+export { selectFeatures, type FeatureSelection, type MissingReport } from "./table/selectFeatures.ts";
 export { zScore, type ScaledTable } from "./scale/zScore.ts";
 export { minMax } from "./scale/minMax.ts";
 export { robust } from "./scale/robust.ts";
@@ -29,6 +53,7 @@ export {
   maybeLandmarkRule,
   maybeScale,
   maybeMissingPolicy,
+  featureWeights,
   type CoverParams,
   type LandmarkRule,
   type ScaleName,
@@ -37,6 +62,7 @@ export {
 export { suggestRadius, type RadiusBasis } from "./cover/suggestRadius.ts";
 export { excludeUndefinedRows } from "./cover/excludeUndefinedRows.ts";
 export { nodeMeans, nodeMembers } from "./cover/nodeMeans.ts";
+export { nodeMajority, nodeLevelShare } from "./cover/nodeCategories.ts";
 export { mean } from "./stats/mean.ts";
 export { sampleVariance } from "./stats/sampleVariance.ts";
 export { quantileSorted } from "./stats/quantileSorted.ts";
@@ -46,3 +72,26 @@ export { coverExports, exportSchemaVersion, type CoverExports, type ExportContex
 export { zipExports } from "./export/zipExports.ts";
 export { csvNumber, csvText, csvLine } from "./export/csvCell.ts";
 export { randomSource, shuffledOrder } from "./random.ts";
+export { Cancelled, isCancelled } from "./cancel.ts";
+export { radiusSweep, sweepPrepared, defaultSweepSteps, type RadiusSweep, type SweepOptions } from "./sweep/radiusSweep.ts";
+export type { SweepFigures } from "./sweep/sweepFigures.ts";
+export type { Plateau } from "./sweep/plateaus.ts";
+export type { StartSuggestion } from "./sweep/suggestStart.ts";
+export type { SweepParams } from "./sweep/prepareRows.ts";
+export { regionStability, type RegionTrack } from "./stability/regionStability.ts";
+export { seedStability, defaultSeedCount, type SeedStability, type Spread } from "./stability/seedStability.ts";
+export { prepareRows, type PreparedRows } from "./sweep/prepareRows.ts";
+export { defaultRange, defaultRangeRule, type RadiusRange } from "./sweep/defaultRange.ts";
+export { logSpacedRadii, ascendingRadii } from "./sweep/logSpacedRadii.ts";
+export { plateaus } from "./sweep/plateaus.ts";
+export { suggestStart, suggestionRule } from "./sweep/suggestStart.ts";
+export { figureBuffers } from "./sweep/sweepFigures.ts";
+export { nerveLoops, type LoopCounts } from "./sweep/nerveLoops.ts";
+export { matchRegion, type RegionMatch } from "./stability/matchRegion.ts";
+export { selectionMask } from "./stability/selectionMask.ts";
+export { createRowIndex, maybeRowIndex, type RowIndex, type RowIndexOptions } from "./search/rowIndex.ts";
+export { ballRows } from "./search/ballRows.ts";
+export { greedyBalls, type GreedyBallsOptions, type NetWithBalls } from "./search/greedyBalls.ts";
+export { maximinBalls, type MaximinBallsOptions } from "./search/maximinBalls.ts";
+export { blockMembership } from "./search/blockMembership.ts";
+export type { NetOptions } from "./landmark/greedyNet.ts";

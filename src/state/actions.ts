@@ -1,8 +1,9 @@
-import { coverExports, zipExports, type ParsedTable } from "../core/index.ts";
+import { coverExports, zipExports, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
+import type { TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
-import { selectCoverParams, selectIdColumn, selectOutcomeNames } from "./selectors.ts";
+import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
 import { workbenchStore, type WorkbenchStore } from "./store.ts";
@@ -25,20 +26,40 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   let latestBuild = 0;
   const set = store.setState;
 
-  async function loadText(text: string, source: DataSource, hints: RoleHints = {}, colorBy: string | null = null): Promise<void> {
+  interface LoadRequest {
+    readonly tableSource: TableSource;
+    readonly source: DataSource;
+    readonly hints: RoleHints;
+    readonly colorBy: string | null;
+  }
+  let lastLoad: LoadRequest | null = null;
+
+  async function load(request: LoadRequest, options: ByteReadOptions): Promise<void> {
     const ticket = ++latestLoad;
     latestBuild++; // any build in flight belongs to the old table
-    set({ loadStatus: "loading", loadError: null });
-    const answer = await env.client.send({ type: "load", text });
+    lastLoad = request;
+    set({ loadStatus: "loading", loadError: null, loadProgress: 0, readOptions: options });
+    const answer = await env.client.send({ type: "load", source: request.tableSource, options }, (progress) => {
+      if (ticket === latestLoad) set({ loadProgress: progress.fraction });
+    });
     if (ticket !== latestLoad) return;
+    if (answer.type === "cancelled") {
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+      return;
+    }
     if (answer.type !== "loaded") {
       set({ loadStatus: "failed", loadError: answer.type === "failed" ? answer.message : "unexpected answer" });
       return;
     }
+    const { source, hints, colorBy } = request;
     const table: ParsedTable = answer.table;
     const roles = defaultRoles(table, hints);
     const colour = colorBy ?? table.columns.find((c) => roles[c.name] === "outcome" && c.kind === "numeric")?.name ?? null;
-    set({ source, table, roles, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, radius: NaN, suggestedRadius: NaN });
+    set({
+      source, table, report: answer.report, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, regionNodes: [],
+      radius: NaN, suggestedRadius: NaN, sweep: null, region: null, seedRuns: null,
+      stage: answer.report.notices.length > 0 && !source.isDemo ? "report" : "graph",
+    });
     await suggestRadius();
   }
 
@@ -66,14 +87,16 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       return;
     }
     const started = env.now();
+    mark("shoal:build-requested");
     set({ build: { state: "running", phase: null, fraction: 0, error: null, elapsedMs: null } });
     const answer = await env.client.send({ type: "build", params }, (progress) => {
-      if (ticket !== latestBuild || progress.phase === "parse") return;
+      if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds") return;
       set({ build: { ...store.getState().build, phase: progress.phase, fraction: progress.fraction } });
     });
-    if (ticket !== latestBuild) return;
+    if (answer.type === "cancelled") mark("shoal:build-cancelled");
+    if (ticket !== latestBuild || answer.type === "cancelled") return;
     if (answer.type === "built") {
-      set({ result: answer.result, selectedNode: null, build: { state: "done", phase: null, fraction: 1, error: null, elapsedMs: env.now() - started } });
+      set({ result: answer.result, selectedNode: null, regionNodes: [], build: { state: "done", phase: null, fraction: 1, error: null, elapsedMs: env.now() - started } });
     } else {
       set({ build: { state: "failed", phase: null, fraction: 0, error: answer.type === "failed" ? answer.message : "unexpected answer", elapsedMs: null } });
     }
@@ -84,9 +107,21 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     return rebuild();
   };
 
+  const loadText = (text: string, source: DataSource, hints: RoleHints = {}, colorBy: string | null = null): Promise<void> =>
+    load({ tableSource: { kind: "text", text }, source, hints, colorBy }, {});
+
   return {
     loadText,
     suggestRadius,
+    /** Reads the last table again with other reading options (delimiter, decimal mark, encoding, ragged rows). */
+    reload(options: ByteReadOptions): Promise<void> {
+      return lastLoad ? load(lastLoad, options) : Promise.resolve();
+    },
+    cancelLoad(): void {
+      latestLoad++;
+      env.client.cancel("load");
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+    },
     rebuild,
     async loadDemo(): Promise<void> {
       set({ loadStatus: "loading", loadError: null });
@@ -99,8 +134,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       }
       await loadText(text, { fileName: demoTable.fileName, fileSize: new TextEncoder().encode(text).length, isDemo: true }, demoTable.roles, demoTable.colorBy);
     },
-    async loadFile(file: { name: string; size: number; text(): Promise<string> }): Promise<void> {
-      await loadText(await file.text(), { fileName: file.name, fileSize: file.size, isDemo: false });
+    loadFile(file: Blob & { readonly name: string }): Promise<void> {
+      return load({ tableSource: { kind: "file", file }, source: { fileName: file.name, fileSize: file.size, isDemo: false }, hints: {}, colorBy: null }, {});
     },
     setRole(column: string, role: ColumnRole): Promise<void> {
       const roles = { ...store.getState().roles };
@@ -122,8 +157,70 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     setMissing: (missing: ParamsSlice["missing"]): Promise<void> => setAndRebuild({ missing }),
     setLandmarks: (landmarks: ParamsSlice["landmarks"]): Promise<void> => setAndRebuild({ landmarks }),
     setSeed: (seed: number): Promise<void> => (Number.isInteger(seed) ? setAndRebuild({ seed }) : Promise.resolve()),
-    setColorBy: (colorBy: string | null): void => set({ colorBy }),
-    selectNode: (selectedNode: number | null): void => set({ selectedNode }),
+    setWeight(column: string, weight: number): Promise<void> {
+      if (!(weight >= 0) || !Number.isFinite(weight)) return Promise.resolve();
+      return setAndRebuild({ weights: { ...store.getState().weights, [column]: weight } });
+    },
+    /** Stops the running build (the worker answers "cancelled"); the graph shown before stays. */
+    cancelBuild(): void {
+      latestBuild++;
+      env.client.cancel("compute");
+      set({ build: { state: "idle", phase: null, fraction: 0, error: null, elapsedMs: null } });
+    },
+    setColorBy: (colorBy: string | null): void => set({ colorBy, colorLevel: null }),
+    setColorLevel: (colorLevel: string | null): void => set({ colorLevel }),
+    /** Opens a node; the region becomes that node alone unless `extend` adds it to (or removes it from) the region. */
+    selectNode(selectedNode: number | null, extend = false): void {
+      if (selectedNode === null) {
+        set({ selectedNode });
+        return;
+      }
+      const region = store.getState().regionNodes;
+      if (!extend) set({ selectedNode, regionNodes: [selectedNode] });
+      else if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
+      else set({ selectedNode, regionNodes: [...region, selectedNode].sort((a, b) => a - b) });
+    },
+    clearRegion: (): void => set({ regionNodes: [] }),
+    showStage: (stage: "graph" | "report"): void => set({ stage }),
+    setSweepRange(sweepMin: number | null, sweepMax: number | null, sweepSteps: number): void {
+      set({ sweepMin, sweepMax, sweepSteps });
+    },
+    setSeedCount: (seedCount: number): void => set({ seedCount }),
+    /** Radius sweep over the current recipe (without its radius); tracks the region when one is selected. */
+    async runSweep(): Promise<void> {
+      const s = store.getState();
+      const params = selectCoverParams({ ...s, radius: s.radius > 0 ? s.radius : 1 });
+      if (!params) return;
+      const { radius: _radius, ...sweepParams } = params;
+      const ticket = ++latestBuild;
+      set({ stability: { state: "running", task: "sweep", fraction: 0, error: null } });
+      const range = { steps: s.sweepSteps, ...(s.sweepMin === null ? {} : { radiusMin: s.sweepMin }), ...(s.sweepMax === null ? {} : { radiusMax: s.sweepMax }) };
+      const answer = await env.client.send({ type: "sweep", params: sweepParams, range, selection: selectRegionRows(s) }, (progress) => {
+        if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
+      });
+      if (ticket !== latestBuild || answer.type === "cancelled") return;
+      if (answer.type === "swept") set({ sweep: answer.sweep, region: answer.region, stability: { state: "idle", task: null, fraction: 1, error: null } });
+      else set({ stability: { state: "failed", task: "sweep", fraction: 0, error: answer.type === "failed" ? answer.message : "unexpected answer" } });
+    },
+    /** Rebuilds at the current radius with k seeds (seeded shuffle) and reports their spread and agreement. */
+    async runSeedStability(): Promise<void> {
+      const s = store.getState();
+      const params = selectCoverParams(s);
+      if (!params) return;
+      const ticket = ++latestBuild;
+      set({ stability: { state: "running", task: "seeds", fraction: 0, error: null } });
+      const answer = await env.client.send({ type: "seeds", params, seeds: s.seedCount, selection: selectRegionRows(s) }, (progress) => {
+        if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
+      });
+      if (ticket !== latestBuild || answer.type === "cancelled") return;
+      if (answer.type === "seeded") set({ seedRuns: answer.stability, stability: { state: "idle", task: null, fraction: 1, error: null } });
+      else set({ stability: { state: "failed", task: "seeds", fraction: 0, error: answer.type === "failed" ? answer.message : "unexpected answer" } });
+    },
+    cancelStability(): void {
+      latestBuild++;
+      env.client.cancel("compute");
+      set({ stability: { state: "idle", task: null, fraction: 0, error: null } });
+    },
     /** The export zip of the current result, or null when nothing is built. */
     exportCover(): { fileName: string; bytes: Uint8Array } | null {
       const s = store.getState();
@@ -138,6 +235,11 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       return { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: zipExports(files) };
     },
   };
+}
+
+/** A User Timing mark (seen by the benchmark's browser probe); a no-op where there is no performance API. */
+function mark(name: string): void {
+  globalThis.performance?.mark?.(name);
 }
 
 let appActions: Actions | null = null;

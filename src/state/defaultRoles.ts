@@ -1,4 +1,4 @@
-import type { ParsedTable } from "../core/index.ts";
+import type { ParsedTable, TableColumn } from "../core/index.ts";
 import type { ColumnRole } from "./slices/paramsSlice.ts";
 
 /** Roles a dataset may bring with it (the demo does); anything unnamed gets the default rule. */
@@ -15,11 +15,16 @@ export interface RoleHints {
 export function defaultRoles(table: ParsedTable, hints: RoleHints = {}): Record<string, ColumnRole> {
   const roles: Record<string, ColumnRole> = {};
   let id = hints.id ?? null;
-  if (id === null) id = table.columns.find((c) => c.kind === "text" && c.missing === 0 && new Set(c.texts).size === table.rows)?.name ?? null;
+  if (id === null) id = table.columns.find((c) => c.kind === "text" && c.missing === 0 && isUnique(c))?.name ?? null;
   for (const column of table.columns) {
     if (column.name === id) roles[column.name] = "id";
     else if (hints.outcomes?.includes(column.name)) roles[column.name] = "outcome";
     else roles[column.name] = column.kind === "numeric" ? "feature" : "ignore";
   }
   return roles;
+}
+
+function isUnique(column: TableColumn): boolean {
+  if (column.type !== undefined) return column.type === "identifier" && (column.categories?.levels.length ?? new Set(column.texts).size) === column.numbers.length;
+  return new Set(column.texts).size === column.numbers.length;
 }

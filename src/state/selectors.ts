@@ -1,5 +1,8 @@
 import {
   columnSummary,
+  featureWeights,
+  nodeLevelShare,
+  nodeMajority,
   nodeMeans,
   nodeMembers,
   standardisedDifference,
@@ -8,6 +11,9 @@ import {
   type ParsedTable,
 } from "../core/index.ts";
 import { memoizeLast } from "./memoizeLast.ts";
+
+/** Colour column name that stands for the seed-stability share of each row (not a table column). */
+export const stabilityColor = "@membership-stability";
 import type { ColumnRole } from "./slices/paramsSlice.ts";
 import type { WorkbenchState } from "./store.ts";
 
@@ -26,18 +32,41 @@ export const selectIdColumn = (s: WorkbenchState): string | null => columnsWithR
 export function selectCoverParams(s: WorkbenchState): CoverParams | null {
   const features = selectFeatureNames(s);
   if (!s.table || features.length === 0 || !(s.radius > 0)) return null;
-  const weights = Object.fromEntries(Object.entries(s.weights).filter(([name, w]) => features.includes(name) && w !== 1));
+  const weights = featureWeights(features, s.weights);
   return { features, scale: s.scale, metric: s.metric, radius: s.radius, landmarks: s.landmarks, seed: s.seed, missing: s.missing, weights };
 }
 
-const memoColors = memoizeLast((table: ParsedTable | null, result: WorkbenchState["result"], column: string | null) => {
-  const source = table?.columns.find((c) => c.name === column);
-  if (!source || !result || source.kind !== "numeric") return null;
-  return nodeMeans(source.numbers, result.members);
-});
+/** How nodes are filled: a number per node on a sequential scale, a level per node, or nothing. */
+export type NodeFill =
+  | { readonly kind: "sequential"; readonly values: Float64Array; readonly caption: string }
+  | { readonly kind: "categorical"; readonly level: Int32Array; readonly levels: readonly string[]; readonly caption: string };
 
-/** Mean of the colour column per node (NaN where a node has no value), or null for a plain fill. */
-export const selectNodeColorValues = (s: WorkbenchState): Float64Array | null => memoColors(s.table, s.result, s.colorBy);
+const memoFill = memoizeLast(
+  (table: ParsedTable | null, result: WorkbenchState["result"], column: string | null, level: string | null, seedRuns: WorkbenchState["seedRuns"]): NodeFill | null => {
+    if (!result) return null;
+    if (column === stabilityColor) {
+      return seedRuns?.regionShare
+        ? { kind: "sequential", values: nodeMeans(seedRuns.regionShare, result.members), caption: "node mean share of seeds keeping the row in the region" }
+        : null;
+    }
+    const source = table?.columns.find((c) => c.name === column);
+    if (!source) return null;
+    if (source.kind === "numeric") return { kind: "sequential", values: nodeMeans(source.numbers, result.members), caption: `node mean of ${source.name}` };
+    if (!source.categories) return null;
+    const index = level === null ? -1 : source.categories.levels.indexOf(level);
+    if (index >= 0) return { kind: "sequential", values: nodeLevelShare(source.categories, result.members, index), caption: `node share of ${source.name} = ${level}` };
+    return { kind: "categorical", level: nodeMajority(source.categories, result.members), levels: source.categories.levels, caption: `most common ${source.name} in the node` };
+  },
+);
+
+/** The fill of every node for the chosen colour column (mean, share of a level, or majority level), or null for a plain fill. */
+export const selectNodeFill = (s: WorkbenchState): NodeFill | null => memoFill(s.table, s.result, s.colorBy, s.colorLevel, s.seedRuns);
+
+/** Numeric fill values per node (NaN where a node has no value), or null when the fill is not numeric. */
+export const selectNodeColorValues = (s: WorkbenchState): Float64Array | null => {
+  const fill = selectNodeFill(s);
+  return fill?.kind === "sequential" ? fill.values : null;
+};
 
 export interface NodeDetail {
   readonly node: number;
@@ -79,3 +108,13 @@ const memoDetail = memoizeLast(
 
 /** Member statistics of the selected node, per numeric column (features and outcomes first as in the table). */
 export const selectNodeDetail = (s: WorkbenchState): NodeDetail | null => memoDetail(s.table, s.result, s.selectedNode, s.roles);
+
+const memoRegionRows = memoizeLast((result: WorkbenchState["result"], regionNodes: readonly number[]): Uint32Array | null => {
+  if (!result || regionNodes.length === 0) return null;
+  const rows = new Set<number>();
+  for (const node of regionNodes) if (node < result.landmarks.length) for (const row of nodeMembers(result.members, node)) rows.add(row);
+  return Uint32Array.from([...rows].sort((a, b) => a - b));
+});
+
+/** Parsed-table rows of the region (the union of its nodes' members), or null when no region is selected. */
+export const selectRegionRows = (s: WorkbenchState): Uint32Array | null => memoRegionRows(s.result, s.regionNodes);

@@ -7,12 +7,14 @@ import { BuildSummary } from "./panels/BuildSummary.tsx";
 import { Cautions } from "./panels/Cautions.tsx";
 import { ColumnRoles } from "./panels/ColumnRoles.tsx";
 import { CoverControls } from "./panels/CoverControls.tsx";
-import { NodeList } from "./panels/NodeList.tsx";
-import { NodePane } from "./panels/NodePane.tsx";
+import { InspectorTabs } from "./panels/InspectorTabs.tsx";
 import { SourceBar } from "./panels/SourceBar.tsx";
+import { TableReport } from "./panels/TableReport.tsx";
+import { useWorkbench } from "./useWorkbench.ts";
 
 /** The workbench: recipe on the left, graph in the middle, the open node on the right. */
 export function App({ openDemo = true }: { openDemo?: boolean }) {
+  const stage = useWorkbench((s) => s.stage);
   useEffect(() => {
     if (openDemo) void actions().loadDemo();
   }, [openDemo]);
@@ -25,12 +27,17 @@ export function App({ openDemo = true }: { openDemo?: boolean }) {
         <ColumnRoles />
       </aside>
       <main className="stage">
-        <ColorLegend />
-        <ForceGraph />
+        {stage === "report" ? (
+          <TableReport />
+        ) : (
+          <>
+            <ColorLegend />
+            <ForceGraph />
+          </>
+        )}
       </main>
-      <aside className="inspector" aria-label="node details">
-        <NodeList />
-        <NodePane />
+      <aside className="inspector" aria-label="side pane">
+        <InspectorTabs />
       </aside>
       <Cautions />
       <DropZone />

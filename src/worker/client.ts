@@ -1,21 +1,36 @@
+import type { ParsedTable } from "../core/index.ts";
 import { createHandler } from "./handle.ts";
-import type { Answer, Progress, Request, WorkerMessage } from "./protocol.ts";
+import { lane, laneOf, type Answer, type Progress, type Request, type WorkerMessage } from "./protocol.ts";
 
 export type RequestBody = Request extends infer R ? (R extends Request ? Omit<R, "id"> : never) : never;
 
 export interface WorkerClient {
-  /** Sends a request; progress reports arrive through `onProgress` until the answer resolves. */
+  /**
+   * Sends a request; progress reports arrive through `onProgress` until the answer resolves.
+   * A compute request (anything but a load) cancels every older compute request still running
+   * or queued: the newest wins, and the older answer is `cancelled`.
+   */
   send(body: RequestBody, onProgress?: (progress: Progress) => void): Promise<Answer>;
+  /** Cancels the running and queued requests of a lane (the load's Cancel button). */
+  cancel(which: keyof typeof lane): void;
+}
+
+interface Pending {
+  readonly request: Request;
+  readonly resolve: (answer: Answer) => void;
+  readonly onProgress: ((p: Progress) => void) | undefined;
 }
 
 /**
- * Main-thread side of the protocol: numbers requests, routes progress and answers by id.
- * Uses a module Web Worker where the platform has one, and otherwise runs the same handler
- * in this thread (tests in jsdom, or a browser without module workers).
+ * Main-thread side of the protocol: numbers requests, routes progress and answers by id, and
+ * cancels. In a cross-origin-isolated page cancellation goes through flags in a SharedArrayBuffer
+ * that the worker's loops read; elsewhere the client ends the worker, starts a new one and hands
+ * it the last table again. Without Web Workers (jsdom tests) the same handler runs in this thread.
  */
 export function createWorkerClient(): WorkerClient {
   let nextId = 1;
-  const pending = new Map<number, { resolve: (answer: Answer) => void; onProgress: ((p: Progress) => void) | undefined }>();
+  const pending = new Map<number, Pending>();
+  let table: ParsedTable | null = null; // the worker's current table, to hand to a restarted worker
   const deliver = (message: WorkerMessage): void => {
     const entry = pending.get(message.id);
     if (!entry) return;
@@ -24,33 +39,65 @@ export function createWorkerClient(): WorkerClient {
       return;
     }
     pending.delete(message.id);
+    if (message.type === "loaded") table = message.table;
     entry.resolve(message);
   };
 
-  let post: (request: Request) => void;
   if (typeof Worker === "undefined") {
-    const handle = createHandler();
-    post = (request) => {
-      queueMicrotask(() => deliver(handle(request, deliver)));
+    const handle = createHandler({ progressInterval: 0 }); // in-thread reports cost nothing to deliver
+    return {
+      send(body, onProgress) {
+        const request = { ...body, id: nextId++ } as Request;
+        return new Promise<Answer>((resolve) => {
+          pending.set(request.id, { request, resolve, onProgress });
+          queueMicrotask(() => void Promise.resolve(handle(request, deliver)).then(deliver));
+        });
+      },
+      cancel() {},
     };
-  } else {
-    const worker = new Worker(new URL("./worker.ts", import.meta.url), { type: "module", name: "shoal-cover" });
-    worker.onmessage = (event: MessageEvent<WorkerMessage>) => deliver(event.data);
-    worker.onerror = (event) => {
+  }
+
+  const shared = typeof SharedArrayBuffer !== "undefined" && globalThis.crossOriginIsolated === true;
+  const flags = new Int32Array(shared ? new SharedArrayBuffer(8) : new ArrayBuffer(8));
+  let worker = spawn();
+
+  function spawn(): Worker {
+    const created = new Worker(new URL("./worker.ts", import.meta.url), { type: "module", name: "shoal-cover" });
+    created.onmessage = (event: MessageEvent<WorkerMessage>) => deliver(event.data);
+    created.onerror = (event) => {
       for (const [id, entry] of pending) entry.resolve({ id, type: "failed", message: `worker error: ${event.message}` });
       pending.clear();
     };
-    post = (request) => worker.postMessage(request);
+    if (shared) created.postMessage({ type: "setup", cancelFlags: flags });
+    return created;
+  }
+
+  function stopLane(slot: number, upTo: number): void {
+    if (shared) {
+      Atomics.store(flags, slot, upTo);
+      return;
+    }
+    const stale = [...pending.values()].filter((p) => laneOf(p.request.type) === slot && p.request.id <= upTo);
+    if (stale.length === 0) return;
+    // without shared memory a busy worker cannot be interrupted: end it and start afresh
+    worker.terminate();
+    for (const entry of pending.values()) entry.resolve({ id: entry.request.id, type: "cancelled" });
+    pending.clear();
+    worker = spawn();
+    if (table) worker.postMessage({ id: nextId++, type: "adopt", table } satisfies Request);
   }
 
   return {
     send(body, onProgress) {
-      const id = nextId++;
-      const request = { ...body, id } as Request;
+      const request = { ...body, id: nextId++ } as Request;
+      if (laneOf(request.type) === lane.compute) stopLane(lane.compute, request.id - 1);
       return new Promise<Answer>((resolve) => {
-        pending.set(id, { resolve, onProgress });
-        post(request);
+        pending.set(request.id, { request, resolve, onProgress });
+        worker.postMessage(request);
       });
+    },
+    cancel(which) {
+      stopLane(lane[which], nextId - 1);
     },
   };
 }

@@ -1,37 +1,130 @@
-import { buildCover, parseCsvText, suggestRadius, type ParsedTable } from "../core/index.ts";
-import type { Answer, Progress, Request } from "./protocol.ts";
+import {
+  buildCover,
+  Cancelled,
+  figureBuffers,
+  isCancelled,
+  radiusSweep,
+  readTableBytes,
+  readTableText,
+  regionStability,
+  seedStability,
+  suggestRadius,
+  type ByteSource,
+  type ParsedTable,
+  type ReadOutcome,
+} from "../core/index.ts";
+import { laneOf, type Answer, type Progress, type Request } from "./protocol.ts";
 
-export type Handler = (request: Request, report: (progress: Progress) => void) => Answer;
+export type Handler = (request: Request, report: (progress: Progress) => void) => Answer | Promise<Answer>;
+
+export interface HandlerOptions {
+  readonly now?: () => number;
+  /** True once the main thread has cancelled this request (read from shared flags in a worker). */
+  readonly isStopped?: (request: Request) => boolean;
+  /** Minimum milliseconds between two progress reports of one request. */
+  readonly progressInterval?: number;
+  /** Places a loaded table where other threads can see it without a copy (SharedArrayBuffer), when the page allows. */
+  readonly share?: (table: ParsedTable) => ParsedTable;
+}
 
 /**
  * The worker's pure dispatch, usable in Node and in the main thread: it keeps the last loaded
- * table so builds do not ship the table back and forth. Errors become a `failed` answer.
+ * table so builds do not ship the table back and forth. Long computations report progress through
+ * a callback that also checks for cancellation and stops them by throwing `Cancelled`.
+ * Errors become a `failed` answer, cancellations a `cancelled` one.
  */
-export function createHandler(now: () => number = Date.now): Handler {
+export function createHandler({ now = Date.now, isStopped = () => false, progressInterval = 50, share = (t) => t }: HandlerOptions = {}): Handler {
   let table: ParsedTable | null = null;
   const loaded = (): ParsedTable => {
     if (!table) throw new Error("no table is loaded");
     return table;
   };
+  const adoptOutcome = (request: Extract<Request, { type: "load" }>, outcome: ReadOutcome): Answer => {
+    table = share(outcome.table);
+    return { id: request.id, type: "loaded", table, report: outcome.report };
+  };
+  // text in memory is read at once (so the answer is synchronous); a file is streamed
+  const load = (request: Extract<Request, { type: "load" }>, progress: (phase: Progress["phase"], fraction: number) => void): Answer | Promise<Answer> => {
+    if (request.source.kind === "text") return adoptOutcome(request, readTableText(request.source.text, request.options));
+    return readTableBytes(blobSource(request.source.file), request.options, {
+      utf8: () => {
+        const decoder = new TextDecoder("utf-8", { fatal: true });
+        return (bytes, last) => decoder.decode(bytes, { stream: !last });
+      },
+      onProgress: (fraction) => progress("parse", fraction),
+      shouldStop: () => isStopped(request),
+    }).then(
+      (outcome) => adoptOutcome(request, outcome),
+      (error: unknown) => failure(request.id, error),
+    );
+  };
   return (request, report) => {
+    let lastReport = -Infinity;
+    const progress = (phase: Progress["phase"], fraction: number): void => {
+      if (isStopped(request)) throw new Cancelled();
+      const t = now();
+      if (t - lastReport < progressInterval && fraction < 1) return;
+      lastReport = t;
+      report({ id: request.id, type: "progress", phase, fraction });
+    };
     try {
+      if (isStopped(request)) throw new Cancelled();
       switch (request.type) {
         case "load":
-          table = parseCsvText(request.text);
-          return { id: request.id, type: "loaded", table };
+          return load(request, progress);
+        case "adopt":
+          table = request.table;
+          return { id: request.id, type: "adopted" };
         case "suggestRadius":
           return { id: request.id, type: "radius", radius: suggestRadius(loaded(), request.params) };
-        case "build": {
-          const onProgress = (phase: Progress["phase"], fraction: number): void => report({ id: request.id, type: "progress", phase, fraction });
-          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress, now }) };
+        case "build":
+          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress: progress, now }) };
+        case "sweep": {
+          const { radiusMin, radiusMax, steps } = request.range;
+          const options = {
+            steps,
+            ...(radiusMin === undefined ? {} : { radiusMin }),
+            ...(radiusMax === undefined ? {} : { radiusMax }),
+            now,
+            onProgress: (fraction: number) => progress("sweep", fraction),
+            shouldStop: () => isStopped(request),
+          };
+          if (request.selection && request.selection.length > 0) {
+            const { sweep, region } = regionStability(loaded(), request.params, request.selection, options);
+            return { id: request.id, type: "swept", sweep, region };
+          }
+          return { id: request.id, type: "swept", sweep: radiusSweep(loaded(), request.params, options), region: null };
+        }
+        case "seeds": {
+          const stability = seedStability(loaded(), request.params, {
+            seeds: request.seeds,
+            ...(request.selection && request.selection.length > 0 ? { selection: request.selection } : {}),
+            onProgress: (fraction: number) => progress("seeds", fraction),
+            shouldStop: () => isStopped(request),
+          });
+          return { id: request.id, type: "seeded", stability };
         }
         default:
           return assertNever(request);
       }
     } catch (error) {
-      return { id: request.id, type: "failed", message: error instanceof Error ? error.message : String(error) };
+      return failure(request.id, error);
     }
   };
+}
+
+function failure(id: number, error: unknown): Answer {
+  if (isCancelled(error)) return { id, type: "cancelled" };
+  return { id, type: "failed", message: error instanceof Error ? error.message : String(error) };
+}
+
+function blobSource(file: Blob): ByteSource {
+  return { size: file.size, read: async (start, end) => new Uint8Array(await file.slice(start, end).arrayBuffer()) };
+}
+
+/** Cancellation read from shared flags: request id ≤ the value in its lane's slot is stopped. */
+export function flagsStopper(flags: Int32Array): (request: Request) => boolean {
+  return (request) => request.id <= Atomics.load(flags, laneOf(request.type));
 }
 
 function assertNever(value: never): never {
@@ -40,6 +133,10 @@ function assertNever(value: never): never {
 
 /** Typed-array buffers in an answer, so the worker can transfer them instead of copying. */
 export function transferables(answer: Answer): ArrayBuffer[] {
+  if (answer.type === "swept") {
+    return [...new Set([...figureBuffers(answer.sweep.figures), ...(answer.region ? [answer.region.jaccard.buffer as ArrayBuffer] : [])])];
+  }
+  if (answer.type === "seeded") return answer.stability.regionShare ? [answer.stability.regionShare.buffer as ArrayBuffer] : [];
   if (answer.type !== "built") return [];
   const { result } = answer;
   const arrays = [result.usedRows, result.droppedRows, result.undefinedRows, result.landmarks, result.members.offsets, result.members.items,

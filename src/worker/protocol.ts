@@ -1,24 +1,70 @@
-import type { BuildPhase, CoverParams, CoverResult, ParsedTable, RadiusBasis } from "../core/index.ts";
+import type {
+  BuildPhase,
+  ByteReadOptions,
+  CoverParams,
+  CoverResult,
+  ParsedTable,
+  RadiusBasis,
+  RadiusSweep,
+  RegionTrack,
+  SeedStability,
+  SweepParams,
+  TableReport,
+} from "../core/index.ts";
 
-/** Requests from the main thread. Each carries an increasing id; the answer repeats it. */
+/** What to read: text already in memory (the demo) or a file the user dropped or picked. */
+export type TableSource = { readonly kind: "text"; readonly text: string } | { readonly kind: "file"; readonly file: Blob };
+
+/** Radius range of a sweep: an end left out comes from the default range rule. */
+export interface SweepRange {
+  readonly radiusMin?: number;
+  readonly radiusMax?: number;
+  readonly steps: number;
+}
+
+/**
+ * Requests from the main thread. Each carries an increasing id; the answer repeats it.
+ * "Compute" requests (everything but load and adopt) share one lane: a newer one cancels the older.
+ */
 export type Request =
-  | { readonly id: number; readonly type: "load"; readonly text: string }
+  | { readonly id: number; readonly type: "load"; readonly source: TableSource; readonly options: ByteReadOptions }
+  /** Hands the worker a table the main thread already holds (after a worker restart). */
+  | { readonly id: number; readonly type: "adopt"; readonly table: ParsedTable }
   | { readonly id: number; readonly type: "suggestRadius"; readonly params: RadiusBasis }
-  | { readonly id: number; readonly type: "build"; readonly params: CoverParams };
+  | { readonly id: number; readonly type: "build"; readonly params: CoverParams }
+  /** A radius sweep; with a selection (parsed-table rows), also its matched region per radius. */
+  | { readonly id: number; readonly type: "sweep"; readonly params: SweepParams; readonly range: SweepRange; readonly selection: Uint32Array | null }
+  | { readonly id: number; readonly type: "seeds"; readonly params: CoverParams; readonly seeds: number; readonly selection: Uint32Array | null };
+
+export type RequestType = Request["type"];
+
+/** Lanes of cancellation: index into the shared cancel flags. */
+export const lane = { compute: 0, load: 1 } as const;
+export const laneOf = (type: RequestType): number => (type === "load" || type === "adopt" ? lane.load : lane.compute);
 
 /** Final answers. `load` returns the parsed table so the main thread can colour, summarise and export. */
 export type Answer =
-  | { readonly id: number; readonly type: "loaded"; readonly table: ParsedTable }
+  | { readonly id: number; readonly type: "loaded"; readonly table: ParsedTable; readonly report: TableReport }
+  | { readonly id: number; readonly type: "adopted" }
   | { readonly id: number; readonly type: "radius"; readonly radius: number }
   | { readonly id: number; readonly type: "built"; readonly result: CoverResult }
+  | { readonly id: number; readonly type: "swept"; readonly sweep: RadiusSweep; readonly region: RegionTrack | null }
+  | { readonly id: number; readonly type: "seeded"; readonly stability: SeedStability }
+  | { readonly id: number; readonly type: "cancelled" }
   | { readonly id: number; readonly type: "failed"; readonly message: string };
 
 /** Sent any number of times before the answer. */
 export interface Progress {
   readonly id: number;
   readonly type: "progress";
-  readonly phase: BuildPhase | "parse";
+  readonly phase: BuildPhase | "parse" | "suggest" | "sweep" | "seeds";
   readonly fraction: number;
+}
+
+/** The first message to a worker: where to read cancellations (an Int32Array over a SharedArrayBuffer, one slot per lane). */
+export interface Setup {
+  readonly type: "setup";
+  readonly cancelFlags: Int32Array;
 }
 
 export type WorkerMessage = Answer | Progress;

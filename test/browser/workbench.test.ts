@@ -68,6 +68,9 @@ it("demo: builds in the worker, a clicked node opens its pane, and the export eq
   expect(nodeCount).toBeGreaterThanOrEqual(30); // the default-radius rule aims at 30–150 nodes on the demo
   expect(nodeCount).toBeLessThanOrEqual(150);
 
+  const built = await page.getByText(/^Built in \d+ ms\.$/).textContent();
+  console.log(`demo build in the worker at the default radius (request to answer): ${built}`);
+
   const point = await settledNodePoint(page);
   await page.getByTestId("graph-canvas").click({ position: point });
   const pane = page.getByTestId("node-pane");

@@ -4,11 +4,12 @@ import type { RequestBody, WorkerClient } from "../../src/worker/client.ts";
 
 /** A client over the in-thread handler that answers on the next microtask, as the client's fallback does. */
 export function inThreadClient(): WorkerClient & { readonly sent: RequestBody[] } {
-  const handle = createHandler(() => 0);
+  const handle = createHandler({ now: () => 0 });
   const sent: RequestBody[] = [];
   let id = 0;
   return {
     sent,
+    cancel() {},
     send(body, onProgress) {
       sent.push(body);
       const request = { ...body, id: ++id } as Request;
@@ -23,11 +24,12 @@ export function inThreadClient(): WorkerClient & { readonly sent: RequestBody[] 
  * included) and resolves its answer. Other requests are answered at once.
  */
 export function delayingClient() {
-  const handle = createHandler(() => 0);
+  const handle = createHandler({ now: () => 0 });
   const parked: { request: Request; onProgress: ((p: Progress) => void) | undefined; resolve: (answer: Answer) => void }[] = [];
   let id = 0;
   const state = { hold: false };
   const client: WorkerClient = {
+    cancel() {},
     send(body, onProgress) {
       const request = { ...body, id: ++id } as Request;
       if (!state.hold || body.type !== "build") return Promise.resolve().then(() => handle(request, (p) => onProgress?.(p)));
@@ -36,7 +38,7 @@ export function delayingClient() {
   };
   const release = async (k: number): Promise<void> => {
     const entry = parked[k]!;
-    entry.resolve(handle(entry.request, (p) => entry.onProgress?.(p)));
+    void Promise.resolve(handle(entry.request, (p) => entry.onProgress?.(p))).then(entry.resolve);
     await new Promise((resolve) => setTimeout(resolve, 0)); // let the awaiting action run
   };
   return { client, state, parked, release };
@@ -56,10 +58,11 @@ export const noDemo = (): Promise<string> => Promise.reject(new Error("no demo i
  * The test decides what the user does between steps.
  */
 export function queuedClient() {
-  const handle = createHandler(() => 0);
+  const handle = createHandler({ now: () => 0 });
   const queue: { request: Request; onProgress: ((p: Progress) => void) | undefined; resolve: (answer: Answer) => void }[] = [];
   let id = 0;
   const client: WorkerClient = {
+    cancel() {},
     send(body, onProgress) {
       const request = { ...body, id: ++id } as Request;
       return new Promise<Answer>((resolve) => queue.push({ request, onProgress, resolve }));
@@ -72,7 +75,7 @@ export function queuedClient() {
     async step(): Promise<void> {
       const entry = queue.shift();
       if (!entry) throw new Error("no request is waiting");
-      entry.resolve(handle(entry.request, (p) => entry.onProgress?.(p)));
+      void Promise.resolve(handle(entry.request, (p) => entry.onProgress?.(p))).then(entry.resolve);
       await settle();
     },
     async drain(): Promise<void> {

@@ -7,7 +7,7 @@ describe("worker client without a Worker (in-thread fallback)", () => {
   it("numbers requests from 1 and resolves each with its own answer", async () => {
     const client = createWorkerClient();
     const [loaded, radius] = await Promise.all([
-      client.send({ type: "load", text: "x\n1\n2\n4\n" }),
+      client.send({ type: "load", source: { kind: "text", text: "x\n1\n2\n4\n" }, options: {} }),
       client.send({ type: "suggestRadius", params: { features: ["x"], metric: "euclidean", scale: "zscore" } }),
     ]);
     expect(loaded).toMatchObject({ id: 1, type: "loaded" });
@@ -16,7 +16,7 @@ describe("worker client without a Worker (in-thread fallback)", () => {
 
   it("routes progress reports of a build to that request's callback before the answer", async () => {
     const client = createWorkerClient();
-    await client.send({ type: "load", text: "x\n1\n2\n4\n" });
+    await client.send({ type: "load", source: { kind: "text", text: "x\n1\n2\n4\n" }, options: {} });
     const reports: Progress[] = [];
     const answer = await client.send(
       { type: "build", params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy", seed: 1 } },

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { CoverParams } from "../../src/core/index.ts";
+import { loadText, now } from "./answers.ts";
 import { createHandler, transferables } from "../../src/worker/handle.ts";
 import type { Answer, Progress, Request } from "../../src/worker/protocol.ts";
 
@@ -9,8 +10,8 @@ const ignore = (): void => {};
 
 /** A handler with a table loaded. */
 function loadedHandler(text = csv) {
-  const handle = createHandler(() => 0);
-  const answer = handle({ id: 1, type: "load", text }, ignore);
+  const handle = createHandler({ now: () => 0, progressInterval: 0 });
+  const answer = now(handle(loadText(1, text), ignore));
   expect(answer.type).toBe("loaded");
   return handle;
 }
@@ -22,7 +23,7 @@ const failure = (answer: Answer): string => {
 
 describe("worker handler: answers", () => {
   it("load answers 'loaded' with the request id and the parsed table", () => {
-    const answer = createHandler()({ id: 7, type: "load", text: csv }, ignore);
+    const answer = now(createHandler()(loadText(7, csv), ignore));
     expect(answer).toMatchObject({ id: 7, type: "loaded" });
     if (answer.type !== "loaded") return;
     expect(answer.table.rows).toBe(4);
@@ -30,13 +31,13 @@ describe("worker handler: answers", () => {
   });
 
   it("suggestRadius answers 'radius' with a positive radius for the loaded table", () => {
-    const answer = loadedHandler()({ id: 2, type: "suggestRadius", params: { features: ["x", "y"], metric: "euclidean", scale: "zscore" } }, ignore);
+    const answer = now(loadedHandler()({ id: 2, type: "suggestRadius", params: { features: ["x", "y"], metric: "euclidean", scale: "zscore" } }, ignore));
     expect(answer).toMatchObject({ id: 2, type: "radius" });
     if (answer.type === "radius") expect(answer.radius).toBeGreaterThan(0);
   });
 
   it("build answers 'built' with a cover result for the loaded table and the given parameters", () => {
-    const answer = loadedHandler()({ id: 3, type: "build", params }, ignore);
+    const answer = now(loadedHandler()({ id: 3, type: "build", params }, ignore));
     expect(answer).toMatchObject({ id: 3, type: "built" });
     if (answer.type !== "built") return;
     expect(answer.result.params).toEqual(params);
@@ -47,13 +48,13 @@ describe("worker handler: answers", () => {
 
   it("builds use the latest loaded table", () => {
     const handle = loadedHandler();
-    handle({ id: 2, type: "load", text: "x,y\n1,2\n3,4\n" }, ignore);
-    const answer = handle({ id: 3, type: "build", params }, ignore);
+    now(handle(loadText(2, "x,y\n1,2\n3,4\n"), ignore));
+    const answer = now(handle({ id: 3, type: "build", params }, ignore));
     expect(answer.type === "built" && answer.result.rowsRead).toBe(2);
   });
 
   it("transferables lists the result's buffers once each for a built answer, and none otherwise", () => {
-    const answer = loadedHandler()({ id: 3, type: "build", params }, ignore);
+    const answer = now(loadedHandler()({ id: 3, type: "build", params }, ignore));
     const buffers = transferables(answer);
     expect(buffers.length).toBeGreaterThan(0);
     expect(new Set(buffers).size).toBe(buffers.length);
@@ -65,30 +66,30 @@ describe("worker handler: answers", () => {
 describe("worker handler: failures become clear failed answers", () => {
   it("a build before any load fails with 'no table is loaded'", () => {
     const handle = createHandler();
-    expect(failure(handle({ id: 1, type: "build", params }, ignore))).toBe("no table is loaded");
-    expect(failure(handle({ id: 2, type: "suggestRadius", params }, ignore))).toBe("no table is loaded");
+    expect(failure(now(handle({ id: 1, type: "build", params }, ignore)))).toBe("no table is loaded");
+    expect(failure(now(handle({ id: 2, type: "suggestRadius", params }, ignore)))).toBe("no table is loaded");
   });
 
   it("an unknown feature column fails naming the column", () => {
-    expect(failure(loadedHandler()({ id: 4, type: "build", params: { ...params, features: ["x", "z"] } }, ignore))).toBe("unknown column: z");
+    expect(failure(now(loadedHandler()({ id: 4, type: "build", params: { ...params, features: ["x", "z"] } }, ignore)))).toBe("unknown column: z");
   });
 
   it("a text feature column fails naming the column", () => {
-    expect(failure(loadedHandler()({ id: 4, type: "build", params: { ...params, features: ["name"] } }, ignore))).toBe("not a numeric column: name");
+    expect(failure(now(loadedHandler()({ id: 4, type: "build", params: { ...params, features: ["name"] } }, ignore)))).toBe("not a numeric column: name");
   });
 
   it("a bad radius fails naming the radius", () => {
     const handle = loadedHandler();
-    expect(failure(handle({ id: 5, type: "build", params: { ...params, radius: -1 } }, ignore))).toBe("invalid radius: -1");
-    expect(failure(handle({ id: 6, type: "build", params: { ...params, radius: 0 } }, ignore))).toBe("invalid radius: 0");
+    expect(failure(now(handle({ id: 5, type: "build", params: { ...params, radius: -1 } }, ignore)))).toBe("invalid radius: -1");
+    expect(failure(now(handle({ id: 6, type: "build", params: { ...params, radius: 0 } }, ignore)))).toBe("invalid radius: 0");
   });
 
   it("a file that cannot be read fails with the parser's message, keeping the request id", () => {
-    expect(createHandler()({ id: 9, type: "load", text: "x,y\n" }, ignore)).toEqual({ id: 9, type: "failed", message: "the file has a header but no data records" });
+    expect(now(createHandler()(loadText(9, "x,y\n"), ignore))).toEqual({ id: 9, type: "failed", message: "the file has a header but no data records" });
   });
 
   it("an unknown request type fails with 'unknown request'", () => {
-    const answer = createHandler()({ id: 3, type: "explode" } as unknown as Request, ignore);
+    const answer = now(createHandler()({ id: 3, type: "explode" } as unknown as Request, ignore));
     expect(failure(answer)).toMatch(/^unknown request: /);
     expect(answer.id).toBe(3);
   });
@@ -100,7 +101,7 @@ describe("worker handler: progress", () => {
   const rows = Array.from({ length: 5000 }, (_, i) => String(i)).join("\n");
   const progress = (): Progress[] => {
     const reports: Progress[] = [];
-    const answer = loadedHandler(`x\n${rows}\n`)({ id: 11, type: "build", params: { ...params, features: ["x"], radius: 0.05 } }, (p) => reports.push(p));
+    const answer = now(loadedHandler(`x\n${rows}\n`)({ id: 11, type: "build", params: { ...params, features: ["x"], radius: 0.05 } }, (p) => reports.push(p)));
     expect(answer.type).toBe("built");
     return reports;
   };

@@ -1,4 +1,4 @@
-import type { ParsedTable } from "../../core/index.ts";
+import type { ByteReadOptions, ParsedTable, TableReport } from "../../core/index.ts";
 
 export interface DataSource {
   readonly fileName: string;
@@ -10,8 +10,14 @@ export interface DataSource {
 export interface DataSlice {
   readonly source: DataSource | null;
   readonly table: ParsedTable | null;
+  /** What the reader decided about the file: format, column types, missing and flagged cells, notices. */
+  readonly report: TableReport | null;
+  /** Reading options in force (empty: everything detected). */
+  readonly readOptions: ByteReadOptions;
   readonly loadStatus: "idle" | "loading" | "ready" | "failed";
+  /** Share of the file read while loading. */
+  readonly loadProgress: number;
   readonly loadError: string | null;
 }
 
-export const initialData: DataSlice = { source: null, table: null, loadStatus: "idle", loadError: null };
+export const initialData: DataSlice = { source: null, table: null, report: null, readOptions: {}, loadStatus: "idle", loadProgress: 0, loadError: null };

@@ -16,6 +16,8 @@ export interface ParamsSlice {
   readonly weights: Readonly<Record<string, number>>;
   /** Column whose node mean colours the graph; null for a plain fill. */
   readonly colorBy: string | null;
+  /** For a categorical colour column: the level whose share colours the nodes, or null for each node's majority level. */
+  readonly colorLevel: string | null;
 }
 
 export const initialParams: ParamsSlice = {
@@ -28,4 +30,5 @@ export const initialParams: ParamsSlice = {
   missing: "drop",
   weights: {},
   colorBy: null,
+  colorLevel: null,
 };

@@ -1,18 +1,21 @@
 import { actions } from "../../state/actions.ts";
-import { selectNodeColorValues } from "../../state/selectors.ts";
+import { selectNodeFill, stabilityColor } from "../../state/selectors.ts";
 import { formatNumber } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
-import { colorSchemeName, missingColor, nodeColorScale } from "./scales.ts";
+import { categoricalSchemeName, colorSchemeName, levelColor, missingColor, nodeColorScale, okabeIto, otherColor } from "./scales.ts";
 
 const stops = 9; // gradient stops drawn from the scale
 
-/** Chooses the colour column and shows the scale with its domain (node means, not row values). */
+/** Chooses the colour column (and, for a categorical one, majority or one level's share) and shows the scale with its domain. */
 export function ColorLegend() {
   const table = useWorkbench((s) => s.table);
   const colorBy = useWorkbench((s) => s.colorBy);
-  const values = useWorkbench(selectNodeColorValues);
-  const scale = values ? nodeColorScale(values) : null;
+  const colorLevel = useWorkbench((s) => s.colorLevel);
+  const fill = useWorkbench(selectNodeFill);
+  const hasStability = useWorkbench((s) => s.seedRuns?.regionShare != null);
   if (!table) return null;
+  const chosen = table.columns.find((c) => c.name === colorBy);
+  const scale = fill?.kind === "sequential" ? nodeColorScale(fill.values) : null;
   const gradient = scale
     ? `linear-gradient(to right, ${Array.from({ length: stops }, (_, i) => {
         const [lo, hi] = scale.domain() as [number, number];
@@ -25,17 +28,37 @@ export function ColorLegend() {
         Colour by
         <select value={colorBy ?? ""} onChange={(e) => actions().setColorBy(e.currentTarget.value || null)}>
           <option value="">nothing (plain)</option>
-          {table.columns.filter((c) => c.kind === "numeric").map((c) => <option key={c.name} value={c.name}>{c.name}</option>)}
+          {table.columns.filter((c) => c.kind === "numeric" || c.categories).map((c) => (
+            <option key={c.name} value={c.name}>{c.name}{c.kind === "numeric" ? "" : " (category)"}</option>
+          ))}
+          {hasStability && <option value={stabilityColor}>stability of membership</option>}
         </select>
       </label>
-      {scale && (
+      {chosen?.categories && (
+        <label>
+          showing
+          <select value={colorLevel ?? ""} onChange={(e) => actions().setColorLevel(e.currentTarget.value || null)}>
+            <option value="">most common level</option>
+            {chosen.categories.levels.map((level) => <option key={level} value={level}>share of {level}</option>)}
+          </select>
+        </label>
+      )}
+      {scale && fill && (
         <div className="legend-scale" title={`Colour scheme: ${colorSchemeName}`}>
           <span data-testid="legend-min">{formatNumber(scale.domain()[0]!)}</span>
           <span className="legend-bar" style={{ background: gradient }} aria-hidden="true" />
           <span data-testid="legend-max">{formatNumber(scale.domain()[1]!)}</span>
-          <span className="legend-caption">node mean of {colorBy}</span>
+          <span className="legend-caption">{fill.caption}</span>
           <span className="legend-missing"><i style={{ background: missingColor }} /> no value</span>
         </div>
+      )}
+      {fill?.kind === "categorical" && (
+        <ul className="legend-levels" title={`Colour scheme: ${categoricalSchemeName}`} aria-label={fill.caption}>
+          {fill.levels.slice(0, okabeIto.length).map((level, k) => (
+            <li key={level}><i style={{ background: levelColor(k) }} /> {level}</li>
+          ))}
+          {fill.levels.length > okabeIto.length && <li><i style={{ background: otherColor }} /> {fill.levels.length - okabeIto.length} more levels</li>}
+        </ul>
       )}
     </div>
   );

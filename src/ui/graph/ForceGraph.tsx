@@ -1,20 +1,21 @@
 import { useCallback, useEffect, useRef } from "react";
 import { actions } from "../../state/actions.ts";
-import { selectNodeColorValues } from "../../state/selectors.ts";
+import { selectNodeFill } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { drawGraph, fitTransform, hitNode, type View } from "./drawGraph.ts";
-import { nodeColorScale } from "./scales.ts";
+import { fillColors } from "./scales.ts";
 import { useForceLayout, type Layout } from "./useForceLayout.ts";
 
 /** The cover graph on a canvas: node area ∝ members, fill by the chosen column's node mean. */
 export function ForceGraph() {
   const result = useWorkbench((s) => s.result);
   const selected = useWorkbench((s) => s.selectedNode);
-  const values = useWorkbench(selectNodeColorValues);
+  const fill = useWorkbench(selectNodeFill);
+  const region = useWorkbench((s) => s.regionNodes);
   const canvas = useRef<HTMLCanvasElement>(null);
   const view = useRef<View | null>(null);
-  const paint = useRef({ selected, values });
-  paint.current = { selected, values };
+  const paint = useRef({ selected, fillOf: fillColors(fill), region });
+  paint.current = { selected, fillOf: fillColors(fill), region };
 
   const draw = useCallback((layout: Layout) => {
     const element = canvas.current;
@@ -29,14 +30,17 @@ export function ForceGraph() {
     }
     context.setTransform(ratio, 0, 0, ratio, 0, 0);
     view.current = fitTransform(layout, width, height);
-    const { values: colourValues, selected: chosen } = paint.current;
-    drawGraph(context, layout, view.current, { width, height, values: colourValues, scale: colourValues ? nodeColorScale(colourValues) : null, selected: chosen });
+    const { fillOf, selected: chosen, region: regionNodes } = paint.current;
+    drawGraph(context, layout, view.current, { width, height, fillOf, selected: chosen, region: regionNodes });
   }, []);
 
   const layout = useForceLayout(result, draw);
   useEffect(() => {
+    if (result) requestAnimationFrame(() => performance.mark("shoal:graph-drawn")); // after the first frame with this result
+  }, [result]);
+  useEffect(() => {
     if (layout.current) draw(layout.current);
-  }, [selected, values, draw, layout]);
+  }, [selected, fill, region, draw, layout]);
   useEffect(() => {
     const element = canvas.current;
     if (!element || typeof ResizeObserver === "undefined") return;
@@ -51,11 +55,11 @@ export function ForceGraph() {
       className="force-graph"
       data-testid="graph-canvas"
       role="img"
-      aria-label={result ? `cover graph with ${result.landmarks.length} nodes and ${result.edges.source.length} edges; use the node list to open a node` : "no graph built yet"}
+      aria-label={result ? `cover graph with ${result.landmarks.length} nodes and ${result.edges.source.length} edges; use the node list to open a node; shift-click adds a node to the region` : "no graph built yet"}
       onClick={(event) => {
         const rect = event.currentTarget.getBoundingClientRect();
         const hit = layout.current && view.current ? hitNode(layout.current, view.current, event.clientX - rect.left, event.clientY - rect.top) : null;
-        actions().selectNode(hit);
+        actions().selectNode(hit, event.shiftKey);
       }}
     />
   );

@@ -1,5 +1,3 @@
-import type { ScaleSequential } from "d3-scale";
-import { missingColor, plainColor } from "./scales.ts";
 import type { Layout } from "./useForceLayout.ts";
 
 /** Screen = world · k + (x, y). */
@@ -26,9 +24,11 @@ export function fitTransform(layout: Layout, width: number, height: number, marg
 export interface Paint {
   readonly width: number;
   readonly height: number;
-  readonly values: Float64Array | null;
-  readonly scale: ScaleSequential<string> | null;
+  /** Fill colour of node k. */
+  readonly fillOf: (node: number) => string;
   readonly selected: number | null;
+  /** Nodes of the selected region, outlined. */
+  readonly region: readonly number[];
 }
 
 export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, view: View, paint: Paint): void {
@@ -36,22 +36,45 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
   context.save();
   context.translate(view.x, view.y);
   context.scale(view.k, view.k);
-  context.strokeStyle = "rgba(70, 80, 95, 0.45)";
+  // edges batched by width class (one stroke per class): thousands of single strokes cost seconds per frame
+  const widthClasses = new Map<number, Layout["links"][number][]>();
   for (const link of layout.links) {
-    context.lineWidth = (0.6 + Math.log2(link.shared)) / view.k;
+    const width = Math.min(8, Math.round(Math.log2(link.shared)));
+    let group = widthClasses.get(width);
+    if (!group) widthClasses.set(width, (group = []));
+    group.push(link);
+  }
+  context.strokeStyle = "rgba(70, 80, 95, 0.45)";
+  for (const [width, links] of widthClasses) {
+    context.lineWidth = (0.6 + width) / view.k;
     context.beginPath();
-    context.moveTo(link.source.x, link.source.y);
-    context.lineTo(link.target.x, link.target.y);
+    for (const link of links) {
+      context.moveTo(link.source.x, link.source.y);
+      context.lineTo(link.target.x, link.target.y);
+    }
     context.stroke();
   }
   for (const node of layout.nodes) {
-    const value = paint.values?.[node.index];
-    context.fillStyle = !paint.scale || value === undefined ? plainColor : Number.isNaN(value) ? missingColor : paint.scale(value);
+    context.fillStyle = paint.fillOf(node.index);
     context.beginPath();
     context.arc(node.x, node.y, node.radius, 0, 2 * Math.PI);
     context.fill();
-    context.lineWidth = 1 / view.k;
-    context.strokeStyle = "#f7f4ec";
+  }
+  context.lineWidth = 1 / view.k;
+  context.strokeStyle = "#f7f4ec";
+  context.beginPath();
+  for (const node of layout.nodes) {
+    context.moveTo(node.x + node.radius, node.y);
+    context.arc(node.x, node.y, node.radius, 0, 2 * Math.PI);
+  }
+  context.stroke();
+  context.lineWidth = 2.5 / view.k;
+  context.strokeStyle = "#23272f";
+  for (const k of paint.region) {
+    const node = layout.nodes[k];
+    if (!node) continue;
+    context.beginPath();
+    context.arc(node.x, node.y, node.radius + 1.5 / view.k, 0, 2 * Math.PI);
     context.stroke();
   }
   const chosen = paint.selected === null ? undefined : layout.nodes[paint.selected];

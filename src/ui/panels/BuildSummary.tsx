@@ -1,4 +1,5 @@
 import { formatCount, plural } from "../format.ts";
+import { actions } from "../../state/actions.ts";
 import { selectFeatureNames } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
@@ -13,6 +14,7 @@ export function BuildSummary() {
         <div className="progress" data-testid="build-progress">
           <span>Building{build.phase ? `: ${build.phase}` : "…"}</span>
           <progress max={1} value={build.fraction} />
+          <button type="button" onClick={() => actions().cancelBuild()}>Cancel</button>
         </div>
       )}
       {noFeatures && <p role="alert" className="error">Choose at least one feature column to build a graph.</p>}
@@ -33,10 +35,8 @@ export function BuildSummary() {
       )}
       {result && (
         <p className="loops-note">
-          Nodes are balls, edges join balls that share rows. Cycle rank (edges − nodes + components) counts every triangle of
-          three overlapping balls; b0 and b1 count the pieces and the loops of the nerve once triangles of balls sharing a row
-          are filled in. Both are properties of this sample: three balls may overlap in pairs with no row in all three, which
-          adds a loop.
+          Cycle rank counts every triangle of overlapping balls; b0 and b1 count pieces and loops once triples of balls sharing
+          a row are filled in. Both describe this sample: three balls overlapping in pairs with no row in all three add a loop.
         </p>
       )}
       {result && result.undefinedRows.length > 0 && (

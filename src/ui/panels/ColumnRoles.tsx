@@ -1,6 +1,7 @@
 import { actions } from "../../state/actions.ts";
 import type { ColumnRole } from "../../state/slices/paramsSlice.ts";
 import { useWorkbench } from "../useWorkbench.ts";
+import { WeightField } from "./WeightField.tsx";
 
 const numericRoles: readonly ColumnRole[] = ["feature", "outcome", "id", "ignore"];
 const textRoles: readonly ColumnRole[] = ["id", "ignore"];
@@ -14,6 +15,7 @@ export function ColumnRoles() {
   return (
     <fieldset className="column-roles">
       <legend>Columns</legend>
+      <p className="note">Role, and weight (× after scaling) for features.</p>
       <ul>
         {table.columns.map((column) => (
           <li key={column.name}>
@@ -31,6 +33,7 @@ export function ColumnRoles() {
                   <option key={role} value={role}>{roleLabel[role]}</option>
                 ))}
               </select>
+              {roles[column.name] === "feature" ? <WeightField column={column.name} /> : <span className="weight" />}
             </label>
           </li>
         ))}

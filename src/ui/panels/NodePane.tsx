@@ -6,6 +6,7 @@ import { useWorkbench } from "../useWorkbench.ts";
 /** Member statistics of the open node, per column: centre and spread, quartiles, and its difference from all rows. */
 export function NodePane() {
   const detail = useWorkbench(selectNodeDetail);
+  const inRegion = useWorkbench((s) => detail !== null && s.regionNodes.includes(detail.node));
   if (!detail) return <p className="note">Click a node in the graph, or choose one in the list above, to see its members.</p>;
   return (
     <section className="node-pane" aria-labelledby="node-title" data-testid="node-pane">
@@ -17,11 +18,14 @@ export function NodePane() {
         <span data-testid="node-size">{formatCount(detail.size)}</span> member rows · landmark is row {detail.landmarkRow + 1} ·
         component {detail.component + 1}
       </p>
+      <button type="button" onClick={() => actions().selectNode(detail.node, true)}>
+        {inRegion ? "Remove from region" : "Add to region"}
+      </button>
       <table>
         <thead>
           <tr>
             <th scope="col">column</th><th scope="col">mean</th><th scope="col">sd</th><th scope="col">median</th>
-            <th scope="col" title="(node mean − mean of all rows) / sd of all rows">Δ in sd</th><th scope="col">missing</th>
+            <th scope="col" title="(node mean − mean of all rows) / sd of all rows">Δ in sd</th>
           </tr>
         </thead>
         <tbody>
@@ -32,7 +36,6 @@ export function NodePane() {
               <td>{formatNumber(summary.sd)}</td>
               <td>{formatNumber(summary.median)}</td>
               <td className={Math.abs(standardisedDifference) >= 1 ? "strong" : undefined}>{formatNumber(standardisedDifference)}</td>
-              <td>{summary.missing}</td>
             </tr>
           ))}
         </tbody>
@@ -41,14 +44,14 @@ export function NodePane() {
         <summary>Quartiles and range</summary>
         <table>
           <thead>
-            <tr><th scope="col">column</th><th scope="col">min</th><th scope="col">Q1</th><th scope="col">median</th><th scope="col">Q3</th><th scope="col">max</th></tr>
+            <tr><th scope="col">column</th><th scope="col">min</th><th scope="col">Q1</th><th scope="col">median</th><th scope="col">Q3</th><th scope="col">max</th><th scope="col">missing</th></tr>
           </thead>
           <tbody>
             {detail.columns.map(({ name, summary }) => (
               <tr key={name}>
                 <th scope="row">{name}</th>
                 <td>{formatNumber(summary.min)}</td><td>{formatNumber(summary.q1)}</td><td>{formatNumber(summary.median)}</td>
-                <td>{formatNumber(summary.q3)}</td><td>{formatNumber(summary.max)}</td>
+                <td>{formatNumber(summary.q3)}</td><td>{formatNumber(summary.max)}</td><td>{summary.missing}</td>
               </tr>
             ))}
           </tbody>

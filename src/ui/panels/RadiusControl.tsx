@@ -50,7 +50,7 @@ export function RadiusControl() {
           if (e.key === "Enter") commit();
         }}
       />
-      <button type="button" onClick={() => void actions().suggestRadius()} title="Radius at which about 1.5·√n landmarks cover the rows (30 to 150); see the README">
+      <button type="button" onClick={() => void actions().suggestRadius()} title="Radius at which about 1.5·√n landmarks cover the rows (at least min(30, n/5), at most 150); see the README">
         Suggest
       </button>
     </div>

@@ -1,0 +1,149 @@
+// npm run bench:browser: the cover build in the workbench's worker, in Debian's headless Chromium
+// driven by playwright-core, against the same build in Node. Prints a table (and writes
+// bench/results/browser.json). Probes: User Timing marks the app sets (build requested → first
+// frame drawn with the result; Cancel → "cancelled" answer), a PerformanceObserver for long tasks
+// on the main thread, and memory from performance.measureUserAgentSpecificMemory() (the page is
+// cross-origin isolated; it counts the worker too) plus the DevTools protocol's
+// Performance.getMetrics JSHeapUsedSize (main thread only).
+import { mkdir, mkdtemp, writeFile } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { performance as nodePerformance } from "node:perf_hooks";
+import { buildCover, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
+import { launchBrowser, startPreview } from "../test/browser/harness.ts";
+import { calibrateRadius } from "./calibrateRadius.ts";
+import { gaussianClusters } from "./syntheticTables.ts";
+
+interface Case {
+  readonly name: string;
+  readonly table: ParsedTable;
+  readonly landmarks: number;
+}
+
+const quick = process.argv.includes("--quick");
+const cases: Case[] = [
+  { name: "8 Gaussian clusters 100,000 × 16", table: gaussianClusters(100_000, 16, 8, 2), landmarks: 1000 },
+  ...(quick ? [] : [{ name: "8 Gaussian clusters 1,000,000 × 8", table: gaussianClusters(1_000_000, 8, 8, 3), landmarks: 1000 }]),
+];
+
+function toCsv(table: ParsedTable): string {
+  const names = table.columns.map((c) => c.name);
+  const lines = [names.join(",")];
+  for (let i = 0; i < table.rows; ++i) lines.push(table.columns.map((c) => String(c.numbers[i])).join(","));
+  return `${lines.join("\n")}\n`;
+}
+
+const folder = await mkdtemp(join(tmpdir(), "shoal-bench-"));
+const preview = await startPreview();
+const rows: Record<string, string | number>[] = [];
+try {
+  for (const c of cases) {
+    const features = c.table.columns.map((col) => col.name);
+    const scaled = zScore(selectFeatures(c.table, features).table).table;
+    const { radius, landmarks } = calibrateRadius(scaled, euclidean, c.landmarks, 0.1);
+    const started = nodePerformance.now();
+    const nodeResult = buildCover(c.table, { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 });
+    const nodeMs = nodePerformance.now() - started;
+    const file = join(folder, `${c.table.rows}x${features.length}.csv`);
+    await writeFile(file, toCsv(c.table));
+
+    const browser = await launchBrowser();
+    const { page } = browser;
+    await page.addInitScript(() => {
+      const w = window as unknown as { __longTasks: number[] };
+      w.__longTasks = [];
+      new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask", buffered: true });
+    });
+    await page.goto(preview.url);
+    await page.getByTestId("node-count").waitFor();
+    const cdp = await page.context().newCDPSession(page);
+    await cdp.send("Performance.enable");
+    const mainHeap = async (): Promise<number> => {
+      const { metrics } = (await cdp.send("Performance.getMetrics")) as { metrics: { name: string; value: number }[] };
+      return metrics.find((m) => m.name === "JSHeapUsedSize")!.value;
+    };
+    let peakMain = 0;
+    const sampler = setInterval(() => void mainHeap().then((v) => (peakMain = Math.max(peakMain, v))).catch(() => {}), 100);
+
+    const loadStarted = Date.now();
+    await page.getByTestId("file-input").setInputFiles(file);
+    await page.getByText(file.split("/").pop()!).waitFor({ timeout: 600_000 });
+    const loadMs = Date.now() - loadStarted;
+    await page.getByTestId("node-count").waitFor({ timeout: 600_000 });
+    await page.evaluate(() => {
+      performance.clearMarks();
+      (window as unknown as { __longTasks: number[] }).__longTasks = [];
+    });
+    await page.locator("#radius-number").fill(String(radius));
+    await page.locator("#radius-number").press("Enter");
+    const drawnMs = await page.waitForFunction(
+      () => {
+        const requested = performance.getEntriesByName("shoal:build-requested").at(-1);
+        const drawn = performance.getEntriesByName("shoal:graph-drawn").filter((m) => requested && m.startTime > requested.startTime).at(-1);
+        return requested && drawn ? drawn.startTime - requested.startTime : null;
+      },
+      undefined,
+      { timeout: 600_000, polling: 50 },
+    ).then((h) => h.jsonValue() as Promise<number>);
+    const nodes = Number((await page.getByTestId("node-count").textContent())!.replaceAll(",", ""));
+    const longest = await page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
+    const memory = await page
+      .evaluate(async () => {
+        const measure = (performance as unknown as { measureUserAgentSpecificMemory?: () => Promise<{ bytes: number }> }).measureUserAgentSpecificMemory;
+        return measure ? (await measure.call(performance)).bytes : NaN;
+      })
+      .catch(() => NaN);
+
+    // cancel: start a build at a fifth of the radius (many more landmarks), cancel it, time the worker's answer
+    await page.evaluate(() => performance.clearMarks());
+    await page.locator("#radius-number").fill(String(radius / 5));
+    await page.locator("#radius-number").press("Enter");
+    await page.getByTestId("build-progress").waitFor();
+    await page.waitForTimeout(300);
+    const cancelAt = await page.evaluate(() => performance.now());
+    await page.getByTestId("build-progress").getByRole("button", { name: "Cancel" }).click();
+    const cancelMs = await page
+      .waitForFunction((t) => {
+        const m = performance.getEntriesByName("shoal:build-cancelled").at(-1);
+        return m ? m.startTime - t : null;
+      }, cancelAt, { timeout: 60_000, polling: 10 })
+      .then((h) => h.jsonValue() as Promise<number>);
+    // the table survives: the calibrated radius builds again
+    await page.locator("#radius-number").fill(String(radius * 1.01));
+    await page.locator("#radius-number").press("Enter");
+    await page.waitForFunction(() => !document.querySelector("[data-testid=build-progress]"), undefined, { timeout: 600_000 });
+    const survived = (await page.getByTestId("node-count").count()) === 1;
+    clearInterval(sampler);
+    await browser.close();
+
+    const tableBytes = c.table.rows * features.length * 8;
+    rows.push({
+      case: c.name,
+      radius: Number(radius.toPrecision(4)),
+      "landmarks (Node)": landmarks,
+      "nodes (browser)": nodes,
+      "same nodes": nodes === nodeResult.landmarks.length ? "yes" : "NO",
+      "load s": (loadMs / 1000).toFixed(1),
+      "Node build ms": nodeMs.toFixed(0),
+      "browser request→drawn ms": drawnMs.toFixed(0),
+      "ratio": (drawnMs / nodeMs).toFixed(2),
+      "longest main task ms": longest.toFixed(0),
+      "cancel→answer ms": cancelMs.toFixed(0),
+      "table survives cancel": survived ? "yes" : "NO",
+      "memory after build ÷ table": (memory / tableBytes).toFixed(2),
+      "main heap peak ÷ table": (peakMain / tableBytes).toFixed(2),
+    });
+  }
+} finally {
+  await preview.stop();
+}
+
+const headers = Object.keys(rows[0] ?? {});
+const widths = headers.map((h) => Math.max(h.length, ...rows.map((r) => String(r[h]).length)));
+const line = (cells: string[]): string => `| ${cells.map((c, i) => c.padEnd(widths[i]!)).join(" | ")} |`;
+console.log("cover build in the browser worker (headless Chromium) vs Node; probes named in bench/browserBuild.ts");
+console.log(line(headers));
+console.log(line(widths.map((w) => "-".repeat(w))));
+for (const r of rows) console.log(line(headers.map((h) => String(r[h]))));
+await mkdir(new URL("./results/", import.meta.url), { recursive: true });
+await writeFile(new URL("./results/browser.json", import.meta.url), `${JSON.stringify({ rows }, null, 2)}\n`);

@@ -1,0 +1,69 @@
+import { open } from "node:fs/promises";
+import { basename } from "node:path";
+import {
+  maybeDecimalMark,
+  maybeDelimiter,
+  maybeEncoding,
+  maybeRaggedPolicy,
+  readTableBytes,
+  type ByteReadOptions,
+  type ReadOutcome,
+} from "../core/index.ts";
+
+export const readOptionSpec = {
+  delimiter: { type: "string" },
+  decimal: { type: "string" },
+  encoding: { type: "string" },
+  ragged: { type: "string" },
+} as const;
+
+export const readUsage = `  --delimiter D       , | ; | tab | pipe (default: detected)
+  --decimal M         . | , (default: detected)
+  --encoding E        utf-8 | windows-1252 (default: detected)
+  --ragged P          reject | pad: records with too few or too many fields (default reject)`;
+
+/** Reading options from the command line; names as in the workbench's reading panel. */
+export function readByteOptions(values: { readonly [K in keyof typeof readOptionSpec]?: string | undefined }): ByteReadOptions {
+  const named: Record<string, string> = { tab: "\t", pipe: "|", comma: ",", semicolon: ";" };
+  return {
+    ...(values.delimiter === undefined ? {} : { delimiter: maybeDelimiter(named[values.delimiter] ?? values.delimiter) }),
+    ...(values.decimal === undefined ? {} : { decimal: maybeDecimalMark(values.decimal) }),
+    ...(values.encoding === undefined ? {} : { encoding: maybeEncoding(values.encoding) }),
+    ...(values.ragged === undefined ? {} : { ragged: maybeRaggedPolicy(values.ragged) }),
+  };
+}
+
+/** Reads a table file through the core pipeline the workbench's worker uses, so both see the same table. */
+export async function readInput(path: string, options: ByteReadOptions): Promise<ReadOutcome & { fileName: string; fileSize: number }> {
+  const handle = await open(path, "r").catch(() => {
+    throw new Error(`cannot read input file: ${path}`);
+  });
+  try {
+    const { size } = await handle.stat();
+    const outcome = await readTableBytes(
+      {
+        size,
+        read: async (start, end) => {
+          const buffer = new Uint8Array(end - start);
+          let done = 0;
+          while (done < buffer.length) {
+            const { bytesRead } = await handle.read(buffer, done, buffer.length - done, start + done);
+            if (bytesRead === 0) break;
+            done += bytesRead;
+          }
+          return buffer.subarray(0, done);
+        },
+      },
+      options,
+      {
+        utf8: () => {
+          const decoder = new TextDecoder("utf-8", { fatal: true });
+          return (bytes, last) => decoder.decode(bytes, { stream: !last });
+        },
+      },
+    );
+    return { ...outcome, fileName: basename(path), fileSize: size };
+  } finally {
+    await handle.close();
+  }
+}

@@ -1,0 +1,50 @@
+import { useState, type KeyboardEvent } from "react";
+import { NodeList } from "./NodeList.tsx";
+import { NodePane } from "./NodePane.tsx";
+import { StabilityPane } from "./StabilityPane.tsx";
+
+const tabs = [
+  { id: "node", label: "Node" },
+  { id: "stability", label: "Stability" },
+] as const;
+
+/** The side pane: the open node's members, or the stability evidence; tabs move with arrow keys. */
+export function InspectorTabs() {
+  const [active, setActive] = useState<(typeof tabs)[number]["id"]>("node");
+  const onKey = (event: KeyboardEvent<HTMLDivElement>): void => {
+    if (event.key !== "ArrowRight" && event.key !== "ArrowLeft") return;
+    const next = tabs[(tabs.findIndex((t) => t.id === active) + 1) % tabs.length]!;
+    setActive(next.id);
+    document.getElementById(`tab-${next.id}`)?.focus();
+  };
+  return (
+    <>
+      <div role="tablist" aria-label="side pane" className="tabs" onKeyDown={onKey}>
+        {tabs.map((tab) => (
+          <button
+            key={tab.id}
+            id={`tab-${tab.id}`}
+            type="button"
+            role="tab"
+            aria-selected={active === tab.id}
+            aria-controls={`panel-${tab.id}`}
+            tabIndex={active === tab.id ? 0 : -1}
+            onClick={() => setActive(tab.id)}
+          >
+            {tab.label}
+          </button>
+        ))}
+      </div>
+      <div role="tabpanel" id={`panel-${active}`} aria-labelledby={`tab-${active}`}>
+        {active === "node" ? (
+          <>
+            <NodeList />
+            <NodePane />
+          </>
+        ) : (
+          <StabilityPane />
+        )}
+      </div>
+    </>
+  );
+}

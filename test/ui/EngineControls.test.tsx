@@ -1,0 +1,57 @@
+import "./support/dom.ts";
+import { render, screen, waitFor } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { expect, it } from "vitest";
+import { workbenchStore } from "../../src/state/store.ts";
+import { BuildSummary } from "../../src/ui/panels/BuildSummary.tsx";
+import { ColumnRoles } from "../../src/ui/panels/ColumnRoles.tsx";
+import { CoverControls } from "../../src/ui/panels/CoverControls.tsx";
+import { loadSmallTable } from "./support/smallTable.ts";
+
+it("choosing the robust scaling rebuilds with scale robust and a newly suggested radius", async () => {
+  const user = userEvent.setup();
+  render(<CoverControls />);
+  await loadSmallTable();
+  await user.selectOptions(screen.getByRole("combobox", { name: "Scaling" }), "robust");
+  await waitFor(() => expect(workbenchStore.getState().result?.params.scale).toBe("robust"));
+  expect(workbenchStore.getState().radius).toBe(workbenchStore.getState().suggestedRadius); // the default rule re-applied
+  expect(screen.getByText(/interquartile range/)).toBeTruthy();
+});
+
+it("filling missing values with the median keeps all 8 rows and reports 1 value filled for x", async () => {
+  const user = userEvent.setup();
+  render(
+    <>
+      <CoverControls />
+      <BuildSummary />
+    </>,
+  );
+  await loadSmallTable();
+  await user.selectOptions(screen.getByRole("combobox", { name: "Missing value" }), "median");
+  await waitFor(() => expect(workbenchStore.getState().result?.params.missing).toBe("median"));
+  const result = workbenchStore.getState().result!;
+  expect(result.usedRows.length).toBe(8); // p5's missing x is filled, so every row of smallTable.ts is used
+  expect(result.imputed).toEqual({ x: 1, y: 0 }); // p5 lacks x only (smallTable.ts)
+  expect(screen.getByText(/Filled in \(median\): x 1/)).toBeTruthy();
+});
+
+it("a feature weight of 0 typed in the column list rebuilds with that weight in the parameters", async () => {
+  const user = userEvent.setup();
+  render(<ColumnRoles />);
+  await loadSmallTable();
+  const weight = screen.getByRole("spinbutton", { name: "weight of y" });
+  await user.clear(weight);
+  await user.type(weight, "0{Enter}");
+  await waitFor(() => expect(workbenchStore.getState().result?.params.weights).toEqual({ y: 0 }));
+});
+
+it("the summary shows cycle rank, b0 and b1 equal to the result's", async () => {
+  render(<BuildSummary />);
+  await loadSmallTable();
+  const result = workbenchStore.getState().result!;
+  expect(screen.getByTestId("cycle-rank").textContent).toBe(String(result.cycleRank));
+  expect(screen.getByTestId("b0").textContent).toBe(String(result.betti!.b0));
+  expect(screen.getByTestId("b1").textContent).toBe(String(result.betti!.b1));
+  expect(result.cycleRank).toBe(0); // 3 nodes in a path, 2 edges (smallTable.ts): 2 − 3 + 1
+  expect(screen.getByText(/three balls overlapping in pairs/)).toBeTruthy();
+});
