@@ -1,7 +1,5 @@
 import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
 import { components } from "../graph/components.ts";
-import { nerveBetti, type NerveBetti } from "../graph/nerveBetti.ts";
-import { nerveTriangles } from "../graph/nerveTriangles.ts";
 import { overlapEdges, type EdgeList } from "../graph/overlapEdges.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
@@ -13,6 +11,7 @@ import type { ParsedTable } from "../table/types.ts";
 import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "./params.ts";
 import { selectFeatures } from "../table/selectFeatures.ts";
+import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 
@@ -38,7 +37,7 @@ export interface CoverResult {
   /** E − V + C: independent cycles of the graph (counts every triangle of mutually overlapping balls). */
   readonly cycleRank: number;
   /** b0, b1 over GF(2) of the nerve's 2-skeleton; null when `loops: false`. */
-  readonly betti: NerveBetti | null;
+  readonly betti: LoopCounts | null;
   /** Milliseconds per phase, by the clock passed in. */
   readonly timings: Readonly<Record<BuildPhase, number>>;
 }
@@ -107,7 +106,8 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const componentTime = lap();
 
   onProgress?.("loops", 0);
-  const betti = loops ? nerveBetti(centers.length, edges, count, nerveTriangles(rowNodes, centers.length)) : null;
+  // b1 by the spanning-forest route (same value as nerveBetti's full reduction, without listing every triangle)
+  const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, { onProgress: (f) => onProgress?.("loops", f) }) : null;
   const loopTime = lap();
 
   const toParsedRow = (i: number): number => defined.usedRows[i]!;

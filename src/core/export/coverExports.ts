@@ -79,7 +79,6 @@ export function coverExports(parsed: ParsedTable, result: CoverResult, context: 
     cycleRank: result.cycleRank,
     b0: result.betti?.b0 ?? null,
     b1: result.betti?.b1 ?? null,
-    triangles: result.betti?.triangles ?? null,
     memberships: result.members.items.length,
   };
   return {

@@ -51,7 +51,7 @@ export function firstHitNet(index: RowIndex, radius: number, order: ArrayLike<nu
       landmarks.push(i);
       if (landmarks.length > maxLandmarks) break;
     }
-    if (onProgress && (k & 4095) === 4095) onProgress(k + 1, order.length);
+    if (onProgress && (k & 255) === 255) onProgress(k + 1, order.length);
   }
   return Uint32Array.from(landmarks);
 }

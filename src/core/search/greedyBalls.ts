@@ -55,7 +55,7 @@ export function greedyBalls(index: RowIndex, radius: number, order: ArrayLike<nu
         return { landmarks: Uint32Array.from([...landmarks, ...rest]), members: null };
       }
     }
-    if (onProgress && (k & 4095) === 4095) onProgress(k + 1, order.length);
+    if (onProgress && (k & 255) === 255) onProgress(k + 1, order.length);
   }
   return { landmarks: Uint32Array.from(landmarks), members: builder && finishLists(builder) };
 }
