@@ -11,6 +11,7 @@ export const commonOptionSpec = {
   seed: { type: "string", default: "1" },
   missing: { type: "string", default: "drop" },
   weights: { type: "string" },
+  "one-hot": { type: "string" },
 } as const;
 
 export const commonUsage = `  --columns a,b,c     feature columns (default: every numeric column but the id and outcomes)
@@ -21,7 +22,8 @@ export const commonUsage = `  --columns a,b,c     feature columns (default: ever
   --landmarks L       greedy (file order) | random (seeded order) | maximin (default greedy)
   --seed N            integer seed for random and maximin (default 1)
   --missing P         drop | median | mean: rows with a missing feature value (default drop)
-  --weights a=2,b=0.5 factor per feature after scaling (default 1)`;
+  --weights a=2,b=0.5 factor per feature after scaling (default 1); for a one-hot column, the indicator's value
+  --one-hot a,b       categorical columns used as features, one 0/1 column per level (not scaled)`;
 
 export interface CommonOptions {
   /** Feature columns, or null for every numeric column except the id and outcomes. */
@@ -51,6 +53,7 @@ export function readCommonOptions(values: { readonly [K in keyof typeof commonOp
       seed,
       missing: maybeMissingPolicy(values.missing ?? "drop"),
       weights: parseWeights(listOption(values.weights)),
+      ...(values["one-hot"] === undefined ? {} : { oneHot: listOption(values["one-hot"]) }),
     },
   };
 }

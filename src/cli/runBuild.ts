@@ -18,11 +18,13 @@ export async function runBuild(command: BuildCommand): Promise<string> {
   }
   const { scale, metric, landmarks, seed } = command.params;
   const missing = command.params.missing ?? "drop";
-  const weights = featureWeights(features, command.params.weights ?? {});
-  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights });
+  const oneHot = command.params.oneHot ?? [];
+  const weights = featureWeights([...features, ...oneHot], command.params.weights ?? {});
+  const encoded = oneHot.length > 0 ? { oneHot } : {};
+  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights, ...encoded });
   if (!(radius > 0)) throw new Error("no default radius: the rows do not differ in the chosen columns");
   // the same key order as the workbench's parameters, so both summaries read alike
-  const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights };
+  const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights, ...encoded };
   const started = performance.now();
   const result = buildCover(table, params, { now: () => performance.now() });
   const elapsed = performance.now() - started;

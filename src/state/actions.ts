@@ -66,9 +66,10 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   async function suggestRadius(): Promise<void> {
     const loadTicket = latestLoad;
     const s = store.getState();
-    const features = s.table ? s.table.columns.filter((c) => s.roles[c.name] === "feature").map((c) => c.name) : [];
-    if (features.length === 0) return;
-    const answer = await env.client.send({ type: "suggestRadius", params: { features, metric: s.metric, scale: s.scale, missing: s.missing, weights: s.weights } });
+    const params = selectCoverParams({ ...s, radius: 1 });
+    if (!params) return;
+    const { radius: _radius, landmarks: _landmarks, seed: _seed, ...basis } = params;
+    const answer = await env.client.send({ type: "suggestRadius", params: basis });
     if (loadTicket !== latestLoad) return; // a newer table has been loaded since
     if (answer.type === "radius" && answer.radius > 0) {
       set({ radius: answer.radius, suggestedRadius: answer.radius });

@@ -20,20 +20,31 @@ import type { WorkbenchState } from "./store.ts";
 const columnsWithRole = (table: ParsedTable | null, roles: Readonly<Record<string, ColumnRole>>, role: ColumnRole): string[] =>
   table ? table.columns.filter((c) => roles[c.name] === role).map((c) => c.name) : [];
 
-const memoFeatures = memoizeLast((table: ParsedTable | null, roles: Readonly<Record<string, ColumnRole>>) => columnsWithRole(table, roles, "feature"));
+const memoFeatures = memoizeLast((table: ParsedTable | null, roles: Readonly<Record<string, ColumnRole>>) =>
+  columnsWithRole(table, roles, "feature").filter((name) => table!.columns.find((c) => c.name === name)!.kind === "numeric"),
+);
+const memoOneHot = memoizeLast((table: ParsedTable | null, roles: Readonly<Record<string, ColumnRole>>) =>
+  columnsWithRole(table, roles, "feature").filter((name) => table!.columns.find((c) => c.name === name)!.kind !== "numeric"),
+);
 const memoOutcomes = memoizeLast((table: ParsedTable | null, roles: Readonly<Record<string, ColumnRole>>) => columnsWithRole(table, roles, "outcome"));
 
-/** Feature columns in table order. */
+/** Numeric feature columns in table order. */
 export const selectFeatureNames = (s: WorkbenchState): string[] => memoFeatures(s.table, s.roles);
+/** Categorical columns used as features through one-hot indicators, in table order. */
+export const selectOneHotNames = (s: WorkbenchState): string[] => memoOneHot(s.table, s.roles);
 export const selectOutcomeNames = (s: WorkbenchState): string[] => memoOutcomes(s.table, s.roles);
 export const selectIdColumn = (s: WorkbenchState): string | null => columnsWithRole(s.table, s.roles, "id")[0] ?? null;
 
 /** The parameters of the next build, or null while they are incomplete. */
 export function selectCoverParams(s: WorkbenchState): CoverParams | null {
   const features = selectFeatureNames(s);
-  if (!s.table || features.length === 0 || !(s.radius > 0)) return null;
-  const weights = featureWeights(features, s.weights);
-  return { features, scale: s.scale, metric: s.metric, radius: s.radius, landmarks: s.landmarks, seed: s.seed, missing: s.missing, weights };
+  const oneHot = selectOneHotNames(s);
+  if (!s.table || features.length + oneHot.length === 0 || !(s.radius > 0)) return null;
+  const weights = featureWeights([...features, ...oneHot], s.weights);
+  return {
+    features, scale: s.scale, metric: s.metric, radius: s.radius, landmarks: s.landmarks, seed: s.seed, missing: s.missing, weights,
+    ...(oneHot.length > 0 ? { oneHot } : {}),
+  };
 }
 
 /** How nodes are filled: a number per node on a sequential scale, a level per node, or nothing. */

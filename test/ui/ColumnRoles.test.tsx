@@ -30,10 +30,10 @@ it("setting y to 'not used' rebuilds with features [x] only", async () => {
   expect((screen.getByRole("combobox", { name: "role of y" }) as HTMLSelectElement).value).toBe("ignore");
 });
 
-it("numeric columns offer feature, outcome, row label and not used; text columns only row label and not used", async () => {
+it("numeric columns offer feature, outcome, row label and not used; an identifier only row label and not used; a categorical column also one-hot", async () => {
   render(<ColumnRoles />);
   await loadSmallTable();
   expect(optionLabels(screen.getByRole("combobox", { name: "role of x" }))).toEqual(["feature", "outcome", "row label", "not used"]);
   expect(optionLabels(screen.getByRole("combobox", { name: "role of id" }))).toEqual(["row label", "not used"]);
-  expect(optionLabels(screen.getByRole("combobox", { name: "role of site" }))).toEqual(["row label", "not used"]);
+  expect(optionLabels(screen.getByRole("combobox", { name: "role of site" }))).toEqual(["feature (one-hot)", "row label", "not used"]);
 });

@@ -6,6 +6,7 @@ import { workbenchStore } from "../../src/state/store.ts";
 import { BuildSummary } from "../../src/ui/panels/BuildSummary.tsx";
 import { ColumnRoles } from "../../src/ui/panels/ColumnRoles.tsx";
 import { CoverControls } from "../../src/ui/panels/CoverControls.tsx";
+import { ColorLegend } from "../../src/ui/graph/ColorLegend.tsx";
 import { loadSmallTable } from "./support/smallTable.ts";
 
 it("choosing the robust scaling rebuilds with scale robust and a newly suggested radius", async () => {
@@ -54,4 +55,24 @@ it("the summary shows cycle rank, b0 and b1 equal to the result's", async () => 
   expect(screen.getByTestId("b1").textContent).toBe(String(result.betti!.b1));
   expect(result.cycleRank).toBe(0); // 3 nodes in a path, 2 edges (smallTable.ts): 2 − 3 + 1
   expect(screen.getByText(/three balls overlapping in pairs/)).toBeTruthy();
+});
+
+it("a categorical column set to 'feature (one-hot)' rebuilds with it in the one-hot parameters", async () => {
+  const user = userEvent.setup();
+  render(<ColumnRoles />);
+  await loadSmallTable();
+  const role = screen.getByRole("combobox", { name: "role of site" });
+  expect(Array.from((role as HTMLSelectElement).options, (o) => o.textContent)).toEqual(["feature (one-hot)", "row label", "not used"]);
+  await user.selectOptions(role, "feature");
+  await waitFor(() => expect(workbenchStore.getState().result?.params.oneHot).toEqual(["site"]));
+  expect(workbenchStore.getState().result?.params.features).toEqual(["x", "y"]); // numeric features unchanged (smallTable.ts)
+});
+
+it("colouring by a categorical column shows each node's most common level with one swatch per level, in file order", async () => {
+  const user = userEvent.setup();
+  render(<ColorLegend />);
+  await loadSmallTable();
+  await user.selectOptions(screen.getByRole("combobox", { name: "Colour by" }), "site");
+  const levels = await screen.findByRole("list", { name: "most common site in the node" });
+  expect(Array.from(levels.querySelectorAll("li"), (li) => li.textContent?.trim())).toEqual(["north", "middle", "south"]); // first appearance in smallTable.ts
 });

@@ -6,11 +6,9 @@ import { randomSource, shuffledOrder } from "../random.ts";
 import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
 import { maximinBalls } from "../search/maximinBalls.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
-import { scaleTable } from "../scale/scaleTable.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
+import { prepareFeatures } from "./prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "./params.ts";
-import { selectFeatures } from "../table/selectFeatures.ts";
 import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
@@ -78,10 +76,8 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     return elapsed;
   };
   onProgress?.("scale", 0);
-  const selection = selectFeatures(parsed, params.features, missing);
-  const scaled = scaleTable(selection.table, params.scale, params.weights);
-  const defined = excludeUndefinedRows(scaled.table, metric, selection.usedRows);
-  const table = defined.table;
+  const prepared = prepareFeatures(parsed, params, metric, missing);
+  const table = prepared.table;
   const scaleTime = lap();
 
   onProgress?.("landmarks", 0);
@@ -110,15 +106,15 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, { onProgress: (f) => onProgress?.("loops", f) }) : null;
   const loopTime = lap();
 
-  const toParsedRow = (i: number): number => defined.usedRows[i]!;
+  const toParsedRow = (i: number): number => prepared.usedRows[i]!;
   return {
-    params: { ...params, features: [...params.features] },
+    params: { ...params, features: [...params.features], ...(params.oneHot ? { oneHot: [...params.oneHot] } : {}) },
     rowsRead: parsed.rows,
-    usedRows: defined.usedRows,
-    droppedRows: selection.droppedRows,
-    undefinedRows: defined.undefinedRows,
-    imputed: selection.imputed,
-    constantColumns: scaled.constantColumns,
+    usedRows: prepared.usedRows,
+    droppedRows: prepared.droppedRows,
+    undefinedRows: prepared.undefinedRows,
+    imputed: prepared.imputed,
+    constantColumns: prepared.constantColumns,
     landmarks: centers.map(toParsedRow),
     members: { offsets: local.offsets, items: local.items.map(toParsedRow) },
     edges,

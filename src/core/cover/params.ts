@@ -18,6 +18,8 @@ export interface CoverParams {
   readonly weights?: Readonly<Record<string, number>>;
   /** Default "drop". */
   readonly missing?: MissingPolicy;
+  /** Categorical columns used as features through one indicator per level (worth the column's weight, default 1). */
+  readonly oneHot?: readonly string[];
 }
 
 export const scaleNames: readonly ScaleName[] = ["zscore", "robust", "minmax", "none"];
@@ -35,7 +37,7 @@ export const maybeLandmarkRule = maybeOneOf(landmarkRules, "landmark rule");
 export const maybeScale = maybeOneOf(scaleNames, "scaling");
 export const maybeMissingPolicy = maybeOneOf(missingPolicies, "missing-value policy");
 
-/** The weights that matter: only features, and only factors other than 1 (so equal recipes compare equal). */
+/** The weights that matter: only features (numeric or one-hot), and only factors other than 1 (so equal recipes compare equal). */
 export function featureWeights(features: readonly string[], weights: Readonly<Record<string, number>>): Record<string, number> {
   return Object.fromEntries(features.flatMap((name) => (name in weights && weights[name] !== 1 ? [[name, weights[name]!]] : [])));
 }

@@ -1,12 +1,10 @@
 import { greedyNet } from "../landmark/greedyNet.ts";
 import { maybeMetric } from "../metric/metrics.ts";
-import { scaleTable } from "../scale/scaleTable.ts";
-import { selectFeatures } from "../table/selectFeatures.ts";
 import type { NumericTable, ParsedTable } from "../table/types.ts";
-import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
 import type { CoverParams } from "./params.ts";
+import { prepareFeatures } from "./prepareFeatures.ts";
 
-export type RadiusBasis = Pick<CoverParams, "features" | "metric" | "scale"> & Partial<Pick<CoverParams, "weights" | "missing">>;
+export type RadiusBasis = Pick<CoverParams, "features" | "metric" | "scale"> & Partial<Pick<CoverParams, "weights" | "missing" | "oneHot">>;
 
 export const suggestionSampleSize = 4000; // rows probed; keeps the search well under a second
 export const suggestionMinNodes = 30;
@@ -23,9 +21,7 @@ export const suggestionMaxNodes = 150;
  */
 export function suggestRadius(parsed: ParsedTable, params: RadiusBasis): number {
   const metric = maybeMetric(params.metric);
-  const selection = selectFeatures(parsed, params.features, params.missing ?? "drop");
-  const weighted = scaleTable(selection.table, params.scale, params.weights).table;
-  const scaled = excludeUndefinedRows(weighted, metric, selection.usedRows).table;
+  const scaled = prepareFeatures(parsed, params, metric, params.missing ?? "drop").table;
   const m = scaled.rows;
   if (m < 2) return NaN;
   const target = Math.min(suggestionMaxNodes, Math.max(Math.min(suggestionMinNodes, Math.ceil(m / 5)), Math.round(1.5 * Math.sqrt(m))));

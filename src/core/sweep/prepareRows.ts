@@ -1,10 +1,8 @@
-import { excludeUndefinedRows } from "../cover/excludeUndefinedRows.ts";
+import { prepareFeatures } from "../cover/prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "../cover/params.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
-import { scaleTable } from "../scale/scaleTable.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
-import { selectFeatures } from "../table/selectFeatures.ts";
 import type { NumericTable, ParsedTable } from "../table/types.ts";
 
 /** Every cover parameter but the radius: what a sweep holds fixed. */
@@ -37,17 +35,6 @@ export function prepareRows(parsed: ParsedTable, params: SweepParams): PreparedR
   maybeLandmarkRule(params.landmarks);
   const missing = maybeMissingPolicy(params.missing ?? "drop");
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
-  const selection = selectFeatures(parsed, params.features, missing);
-  const scaled = scaleTable(selection.table, params.scale, params.weights);
-  const defined = excludeUndefinedRows(scaled.table, metric, selection.usedRows);
-  return {
-    metric,
-    table: defined.table,
-    usedRows: defined.usedRows,
-    droppedRows: selection.droppedRows,
-    undefinedRows: defined.undefinedRows,
-    imputed: selection.imputed,
-    constantColumns: scaled.constantColumns,
-    index: createRowIndex(defined.table, metric),
-  };
+  const prepared = prepareFeatures(parsed, params, metric, missing);
+  return { metric, ...prepared, index: createRowIndex(prepared.table, metric) };
 }

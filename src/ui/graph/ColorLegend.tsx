@@ -2,6 +2,7 @@ import { actions } from "../../state/actions.ts";
 import { selectNodeFill, stabilityColor } from "../../state/selectors.ts";
 import { formatNumber } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
+import { maxDrawnEdges } from "./drawLimits.ts";
 import { categoricalSchemeName, colorSchemeName, levelColor, missingColor, nodeColorScale, okabeIto, otherColor } from "./scales.ts";
 
 const stops = 9; // gradient stops drawn from the scale
@@ -13,6 +14,7 @@ export function ColorLegend() {
   const colorLevel = useWorkbench((s) => s.colorLevel);
   const fill = useWorkbench(selectNodeFill);
   const hasStability = useWorkbench((s) => s.seedRuns?.regionShare != null);
+  const edgeCount = useWorkbench((s) => s.result?.edges.source.length ?? 0);
   if (!table) return null;
   const chosen = table.columns.find((c) => c.name === colorBy);
   const scale = fill?.kind === "sequential" ? nodeColorScale(fill.values) : null;
@@ -51,6 +53,11 @@ export function ColorLegend() {
           <span className="legend-caption">{fill.caption}</span>
           <span className="legend-missing"><i style={{ background: missingColor }} /> no value</span>
         </div>
+      )}
+      {edgeCount > maxDrawnEdges && (
+        <span className="legend-caption" data-testid="edges-note">
+          drawing the {maxDrawnEdges.toLocaleString("en-US")} edges that share the most rows, of {edgeCount.toLocaleString("en-US")}
+        </span>
       )}
       {fill?.kind === "categorical" && (
         <ul className="legend-levels" title={`Colour scheme: ${categoricalSchemeName}`} aria-label={fill.caption}>

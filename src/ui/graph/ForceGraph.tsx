@@ -3,12 +3,15 @@ import { actions } from "../../state/actions.ts";
 import { selectNodeFill } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { drawGraph, fitTransform, hitNode, type View } from "./drawGraph.ts";
+import { maxDrawnNodes } from "./drawLimits.ts";
 import { fillColors } from "./scales.ts";
 import { useForceLayout, type Layout } from "./useForceLayout.ts";
 
 /** The cover graph on a canvas: node area ∝ members, fill by the chosen column's node mean. */
 export function ForceGraph() {
-  const result = useWorkbench((s) => s.result);
+  const built = useWorkbench((s) => s.result);
+  const tooLarge = built !== null && built.landmarks.length > maxDrawnNodes;
+  const result = tooLarge ? null : built;
   const selected = useWorkbench((s) => s.selectedNode);
   const fill = useWorkbench(selectNodeFill);
   const region = useWorkbench((s) => s.regionNodes);
@@ -49,6 +52,14 @@ export function ForceGraph() {
     return () => observer.disconnect();
   }, [draw, layout]);
 
+  if (tooLarge) {
+    return (
+      <p className="too-large" role="status" data-testid="graph-too-large">
+        This graph has {built.landmarks.length.toLocaleString("en-US")} nodes, more than the {maxDrawnNodes.toLocaleString("en-US")} that can be laid out
+        here without freezing the page. Raise the radius to draw it; its counts, statistics and exports are complete.
+      </p>
+    );
+  }
   return (
     <canvas
       ref={canvas}

@@ -1,6 +1,7 @@
 import { forceCollide, forceLink, forceManyBody, forceSimulation, forceX, forceY, type SimulationNodeDatum } from "d3-force";
 import { useEffect, useRef } from "react";
 import type { CoverResult } from "../../core/index.ts";
+import { maxDrawnEdges } from "./drawLimits.ts";
 import { nodeRadius } from "./scales.ts";
 
 export interface LayoutNode extends SimulationNodeDatum {
@@ -17,7 +18,7 @@ export interface Layout {
 
 /**
  * Owns the d3-force simulation for a result: one body per node (area ∝ members), a spring per
- * edge, charge, collision, and a weak pull to the centre so separate components stay in view.
+ * edge (the 4,000 sharing the most rows when there are more), charge, collision, and a weak pull to the centre so separate components stay in view.
  * d3-force seeds its own initial placement, so the same result lays out the same way.
  * Calls `onTick` after every step; the simulation stops on a new result or unmount.
  */
@@ -34,7 +35,11 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
     let maxSize = 1;
     for (let k = 0; k < result.landmarks.length; ++k) maxSize = Math.max(maxSize, offsets[k + 1]! - offsets[k]!);
     const nodes: LayoutNode[] = Array.from(result.landmarks, (_, k) => ({ index: k, radius: nodeRadius(offsets[k + 1]! - offsets[k]!, maxSize), x: 0, y: 0 }));
-    const links = Array.from(result.edges.source, (s, e) => ({ source: nodes[s]!, target: nodes[result.edges.target[e]!]!, shared: result.edges.shared[e]! }));
+    const { source, target, shared } = result.edges;
+    // the strongest edges only (ties to file order), so a dense graph still lays out and draws in a frame
+    let chosen = Array.from(source, (_, e) => e);
+    if (chosen.length > maxDrawnEdges) chosen = chosen.sort((a, b) => shared[b]! - shared[a]! || a - b).slice(0, maxDrawnEdges);
+    const links = chosen.map((e) => ({ source: nodes[source[e]!]!, target: nodes[target[e]!]!, shared: shared[e]! }));
     const current: Layout = { nodes, links };
     layout.current = current;
     const simulation = forceSimulation<LayoutNode>(nodes)

@@ -5,7 +5,9 @@ import { WeightField } from "./WeightField.tsx";
 
 const numericRoles: readonly ColumnRole[] = ["feature", "outcome", "id", "ignore"];
 const textRoles: readonly ColumnRole[] = ["id", "ignore"];
+const categoricalRoles: readonly ColumnRole[] = ["feature", "id", "ignore"];
 const roleLabel: Record<ColumnRole, string> = { feature: "feature", outcome: "outcome", id: "row label", ignore: "not used" };
+const oneHotLabel = "feature (one-hot)";
 
 /** Every column with its role: features span the space; outcomes are only summarised and coloured. */
 export function ColumnRoles() {
@@ -15,7 +17,10 @@ export function ColumnRoles() {
   return (
     <fieldset className="column-roles">
       <legend>Columns</legend>
-      <p className="note">Role, and weight (× after scaling) for features.</p>
+      <p className="note">
+        Role, and weight (× after scaling) for features. A categorical feature adds one 0/1 column per level, worth its weight and never
+        scaled.
+      </p>
       <ul>
         {table.columns.map((column) => (
           <li key={column.name}>
@@ -29,8 +34,8 @@ export function ColumnRoles() {
                 value={roles[column.name] ?? "ignore"}
                 onChange={(event) => void actions().setRole(column.name, event.currentTarget.value as ColumnRole)}
               >
-                {(column.kind === "numeric" ? numericRoles : textRoles).map((role) => (
-                  <option key={role} value={role}>{roleLabel[role]}</option>
+                {(column.kind === "numeric" ? numericRoles : column.categories ? categoricalRoles : textRoles).map((role) => (
+                  <option key={role} value={role}>{role === "feature" && column.kind !== "numeric" ? oneHotLabel : roleLabel[role]}</option>
                 ))}
               </select>
               {roles[column.name] === "feature" ? <WeightField column={column.name} /> : <span className="weight" />}

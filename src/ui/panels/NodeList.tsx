@@ -1,6 +1,7 @@
 import { actions } from "../../state/actions.ts";
 import { selectNodeColorValues } from "../../state/selectors.ts";
 import { formatNumber, plural } from "../format.ts";
+import { maxDrawnNodes } from "../graph/drawLimits.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
 /** Keyboard route to every node: a native list box (arrow keys move, the choice opens the node). */
@@ -11,6 +12,24 @@ export function NodeList() {
   const colorBy = useWorkbench((s) => s.colorBy);
   if (!result) return null;
   const { offsets } = result.members;
+  if (result.landmarks.length > maxDrawnNodes) {
+    return (
+      <label className="node-list">
+        <span>Node number (1 to {result.landmarks.length.toLocaleString("en-US")})</span>
+        <input
+          type="number"
+          min={1}
+          max={result.landmarks.length}
+          aria-label="node number"
+          value={selected === null ? "" : selected + 1}
+          onChange={(e) => {
+            const k = Number(e.currentTarget.value) - 1;
+            if (Number.isInteger(k) && k >= 0 && k < result.landmarks.length) actions().selectNode(k);
+          }}
+        />
+      </label>
+    );
+  }
   return (
     <label className="node-list">
       <span>Nodes ({result.landmarks.length})</span>
