@@ -38,7 +38,8 @@ export async function runBuild(command: BuildCommand): Promise<string> {
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
   });
   const loops = result.betti ? `, b0 ${result.betti.b0}, b1 ${result.betti.b1}` : "";
-  return `${result.landmarks.length} nodes, ${result.edges.source.length} edges, ${result.componentCount} components, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}; wrote ${command.outDir}`;
+  const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? "" : "s"}`;
+  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")}, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}; wrote ${command.outDir}`;
 }
 
 /** Writes every file to a staging folder beside `outDir`, then moves them in; on any failure the staging folder is removed. */
