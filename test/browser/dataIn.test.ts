@@ -1,26 +1,14 @@
 import { readFile } from "node:fs/promises";
 import { strFromU8, unzipSync } from "fflate";
-import { afterAll, beforeAll, expect, it } from "vitest";
+import { expect, it } from "vitest";
 import { buildCover, coverExports, readTableText, type CoverParams } from "../../src/core/index.ts";
-import { launchBrowser, recordPageErrors, recordRequests, saveScreenshot, startPreview } from "./harness.ts";
-import type { LaunchedBrowser, Preview } from "./harness.ts";
+import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession } from "./harness.ts";
 
 // A person drops a semicolon-separated file with decimal commas and a byte-order mark, reads the
 // column report, makes one column an outcome, builds, and exports; the export must equal the
 // core's own result for the same text and parameters.
 
-let preview: Preview | undefined;
-let browser: LaunchedBrowser | undefined;
-
-beforeAll(async () => {
-  preview = await startPreview();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await preview?.stop();
-});
+const session = useBrowserSession();
 
 // Invented rows: two clusters of 30 in (depth, temperature), a score, a unique code and a site.
 const rows = Array.from({ length: 60 }, (_, i) => {
@@ -32,10 +20,10 @@ const rows = Array.from({ length: 60 }, (_, i) => {
 const csv = `\uFEFFcode;depth_m;temp_c;score;site\n${rows.join("\n")}\n`;
 
 it("dropping a ';' file with decimal commas and a BOM shows the report; making score an outcome rebuilds; the export equals the core's", async () => {
-  const { page } = browser!;
+  const { page } = session.browser();
   const requests = recordRequests(page);
   const errors = recordPageErrors(page);
-  await page.goto(preview!.url);
+  await page.goto(session.preview().url);
   await page.getByTestId("node-count").waitFor(); // the demo is up first
 
   const transfer = await page.evaluateHandle((text) => {

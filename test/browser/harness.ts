@@ -23,6 +23,7 @@ import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
@@ -212,4 +213,22 @@ export async function saveScreenshot(page: Page, name: string): Promise<string> 
   const path = join(directory, `${name}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
+}
+
+/**
+ * One preview server and one browser for a test file: registers beforeAll/afterAll and returns
+ * getters for use inside the tests.
+ */
+export function useBrowserSession(): { readonly preview: () => Preview; readonly browser: () => LaunchedBrowser } {
+  let preview: Preview | undefined;
+  let browser: LaunchedBrowser | undefined;
+  beforeAll(async () => {
+    preview = await startPreview();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await preview?.stop();
+  });
+  return { preview: () => preview!, browser: () => browser! };
 }

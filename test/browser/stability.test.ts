@@ -1,28 +1,16 @@
-import { afterAll, beforeAll, expect, it } from "vitest";
-import { launchBrowser, recordPageErrors, recordRequests, saveScreenshot, startPreview } from "./harness.ts";
-import type { LaunchedBrowser, Preview } from "./harness.ts";
+import { expect, it } from "vitest";
+import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession } from "./harness.ts";
 
 // The stability pane on the demo table: sweep the radii, pick one on the chart, and see the
 // graph rebuilt there with the node count the sweep reported for that radius.
 
-let preview: Preview | undefined;
-let browser: LaunchedBrowser | undefined;
-
-beforeAll(async () => {
-  preview = await startPreview();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await preview?.stop();
-});
+const session = useBrowserSession();
 
 it("demo: a radius sweep runs in the worker, a click on the chart rebuilds at that radius, and seed stability reports an agreement", async () => {
-  const { page } = browser!;
+  const { page } = session.browser();
   const requests = recordRequests(page);
   const errors = recordPageErrors(page);
-  await page.goto(preview!.url);
+  await page.goto(session.preview().url);
   await page.getByTestId("node-count").waitFor();
 
   await page.getByRole("tab", { name: "Stability" }).click();

@@ -1,26 +1,14 @@
 import { readFile } from "node:fs/promises";
 import { strFromU8, unzipSync } from "fflate";
-import { afterAll, beforeAll, expect, it } from "vitest";
+import { expect, it } from "vitest";
 import { buildCover, coverExports, parseCsvText, type CoverParams } from "../../src/core/index.ts";
-import { launchBrowser, recordPageErrors, recordRequests, saveScreenshot, startPreview } from "./harness.ts";
-import type { LaunchedBrowser, Preview } from "./harness.ts";
+import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // End to end as a person would use it: open the workbench (demo table by default), wait for the
 // worker's graph, click a node on the canvas, read its pane, export, and check the exported files
 // against the core's own result for the same parameters.
 
-let preview: Preview | undefined;
-let browser: LaunchedBrowser | undefined;
-
-beforeAll(async () => {
-  preview = await startPreview();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await preview?.stop();
-});
+const session = useBrowserSession();
 
 /** CSS-pixel position of an opaque node pixel on the canvas, once the layout has settled. */
 async function settledNodePoint(page: LaunchedBrowser["page"]): Promise<{ x: number; y: number }> {
@@ -58,10 +46,10 @@ async function settledNodePoint(page: LaunchedBrowser["page"]): Promise<{ x: num
 }
 
 it("demo: builds in the worker, a clicked node opens its pane, and the export equals the core's own result", async () => {
-  const { page } = browser!;
+  const { page } = session.browser();
   const requests = recordRequests(page);
   const errors = recordPageErrors(page);
-  await page.goto(preview!.url);
+  await page.goto(session.preview().url);
   await page.getByText("invented demo data").waitFor();
   await page.getByTestId("node-count").waitFor();
   const nodeCount = Number((await page.getByTestId("node-count").textContent())!.replaceAll(",", ""));

@@ -1,3 +1,4 @@
+import { symmetricDifference } from "./symmetricDifference.ts";
 import type { EdgeList } from "./overlapEdges.ts";
 
 export interface NerveBetti {
@@ -49,19 +50,4 @@ export function nerveBetti(nodes: number, edges: EdgeList, b0: number, triangles
     }
   }
   return { b0, b1: edgeCount - nodes + b0 - rank, triangles: count, boundaryRank: rank };
-}
-
-function symmetricDifference(x: readonly number[], y: readonly number[]): number[] {
-  const out: number[] = [];
-  let i = 0;
-  let j = 0;
-  while (i < x.length || j < y.length) {
-    if (j >= y.length || (i < x.length && x[i]! < y[j]!)) out.push(x[i++]!);
-    else if (i >= x.length || y[j]! < x[i]!) out.push(y[j++]!);
-    else {
-      i++;
-      j++;
-    }
-  }
-  return out;
 }

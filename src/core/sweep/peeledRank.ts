@@ -1,3 +1,4 @@
+import { symmetricDifference } from "../graph/symmetricDifference.ts";
 /**
  * Rank over GF(2) of a sparse 0/1 matrix whose columns hold at most three row indices
  * (`columns[3t..3t+2]`, −1 for an empty slot; a row index appears at most once per column).
@@ -57,19 +58,4 @@ export function peeledRank(columns: Int32Array, rows: number): number {
     }
   }
   return rank;
-}
-
-function symmetricDifference(x: readonly number[], y: readonly number[]): number[] {
-  const out: number[] = [];
-  let i = 0;
-  let j = 0;
-  while (i < x.length || j < y.length) {
-    if (j >= y.length || (i < x.length && x[i]! < y[j]!)) out.push(x[i++]!);
-    else if (i >= x.length || y[j]! < x[i]!) out.push(y[j++]!);
-    else {
-      i++;
-      j++;
-    }
-  }
-  return out;
 }
