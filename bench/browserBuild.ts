@@ -11,6 +11,7 @@ import { join } from "node:path";
 import { performance as nodePerformance } from "node:perf_hooks";
 import { buildCover, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
 import { launchBrowser, startPreview } from "../test/browser/harness.ts";
+import { longestTask, pageMemory, resetLongTasks, sampleMainHeap, watchLongTasks } from "./browserProbes.ts";
 import { calibrateRadius } from "./calibrateRadius.ts";
 import { gaussianClusters } from "./syntheticTables.ts";
 
@@ -49,31 +50,18 @@ try {
 
     const browser = await launchBrowser();
     const { page } = browser;
-    await page.addInitScript(() => {
-      const w = window as unknown as { __longTasks: number[] };
-      w.__longTasks = [];
-      new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask", buffered: true });
-    });
+    await watchLongTasks(page);
     await page.goto(preview.url);
     await page.getByTestId("node-count").waitFor();
-    const cdp = await page.context().newCDPSession(page);
-    await cdp.send("Performance.enable");
-    const mainHeap = async (): Promise<number> => {
-      const { metrics } = (await cdp.send("Performance.getMetrics")) as { metrics: { name: string; value: number }[] };
-      return metrics.find((m) => m.name === "JSHeapUsedSize")!.value;
-    };
-    let peakMain = 0;
-    const sampler = setInterval(() => void mainHeap().then((v) => (peakMain = Math.max(peakMain, v))).catch(() => {}), 100);
+    const heap = await sampleMainHeap(page);
 
     const loadStarted = Date.now();
     await page.getByTestId("file-input").setInputFiles(file);
     await page.getByText(file.split("/").pop()!).waitFor({ timeout: 600_000 });
     const loadMs = Date.now() - loadStarted;
     await page.getByTestId("node-count").waitFor({ timeout: 600_000 });
-    await page.evaluate(() => {
-      performance.clearMarks();
-      (window as unknown as { __longTasks: number[] }).__longTasks = [];
-    });
+    await page.evaluate(() => performance.clearMarks());
+    await resetLongTasks(page);
     await page.locator("#radius-number").fill(String(radius));
     await page.locator("#radius-number").press("Enter");
     const drawnMs = await page.waitForFunction(
@@ -86,13 +74,8 @@ try {
       { timeout: 600_000, polling: 50 },
     ).then((h) => h.jsonValue() as Promise<number>);
     const nodes = Number((await page.getByTestId("node-count").textContent())!.replaceAll(",", ""));
-    const longest = await page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
-    const memory = await page
-      .evaluate(async () => {
-        const measure = (performance as unknown as { measureUserAgentSpecificMemory?: () => Promise<{ bytes: number }> }).measureUserAgentSpecificMemory;
-        return measure ? (await measure.call(performance)).bytes : NaN;
-      })
-      .catch(() => NaN);
+    const longest = await longestTask(page);
+    const memory = await pageMemory(page);
 
     // cancel: start a build at half the radius (several times the landmarks), cancel it, time the worker's answer
     await page.evaluate(() => performance.clearMarks());
@@ -118,7 +101,7 @@ try {
     await page.locator("#radius-number").press("Enter");
     await page.waitForFunction(() => !document.querySelector("[data-testid=build-progress]"), undefined, { timeout: 600_000 });
     const survived = (await page.getByTestId("node-count").count()) === 1;
-    clearInterval(sampler);
+    heap.stop();
     await browser.close();
 
     const tableBytes = c.table.rows * features.length * 8;
@@ -136,7 +119,7 @@ try {
       "cancel→answer ms": cancelMs.toFixed(0),
       "table survives cancel": survived ? "yes" : "NO",
       "memory after build ÷ table": (memory / tableBytes).toFixed(2),
-      "main heap peak ÷ table": (peakMain / tableBytes).toFixed(2),
+      "main heap peak ÷ table": (heap.peak() / tableBytes).toFixed(2),
     });
   }
 } finally {

@@ -9,6 +9,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { randomSource } from "../src/core/index.ts";
 import { launchBrowser, startPreview } from "../test/browser/harness.ts";
+import { longestTask, pageMemory, resetLongTasks, sampleMainHeap, watchLongTasks } from "./browserProbes.ts";
 
 const rows = Number(process.env.SHOAL_BENCH_ROWS ?? 1_000_000);
 const columns = 20;
@@ -36,38 +37,23 @@ const preview = await startPreview();
 const browser = await launchBrowser();
 try {
   const { page } = browser;
-  await page.addInitScript(() => {
-    const w = window as unknown as { __longTasks: number[] };
-    w.__longTasks = [];
-    new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask", buffered: true });
-  });
+  await watchLongTasks(page);
   await page.goto(preview.url);
   await page.getByTestId("node-count").waitFor();
-  await page.evaluate(() => ((window as unknown as { __longTasks: number[] }).__longTasks = []));
-  const cdp = await page.context().newCDPSession(page);
-  await cdp.send("Performance.enable");
-  let peakMain = 0;
-  const sampler = setInterval(() => {
-    void cdp
-      .send("Performance.getMetrics")
-      .then((r) => (peakMain = Math.max(peakMain, (r as { metrics: { name: string; value: number }[] }).metrics.find((m) => m.name === "JSHeapUsedSize")!.value)))
-      .catch(() => {});
-  }, 100);
+  await resetLongTasks(page);
+  const heap = await sampleMainHeap(page);
   const started = Date.now();
   await page.getByTestId("file-input").setInputFiles(file);
   await page.getByText(`${rows.toLocaleString("en-US")} rows`).waitFor({ timeout: 900_000 });
   const loadMs = Date.now() - started;
-  clearInterval(sampler);
-  const longest = await page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
-  const memory = await page.evaluate(async () => {
-    const measure = (performance as unknown as { measureUserAgentSpecificMemory?: () => Promise<{ bytes: number }> }).measureUserAgentSpecificMemory;
-    return measure ? (await measure.call(performance)).bytes : NaN;
-  });
+  heap.stop();
+  const longest = await longestTask(page);
+  const memory = await pageMemory(page);
   const table = rows * columns * 8;
   const mb = (x: number): string => (x / 2 ** 20).toFixed(0);
   console.log(`| file | size MiB | load s | longest main task ms | main heap peak MiB | memory after load (main + worker) MiB | Float64 table MiB |`);
   console.log(`| --- | --- | --- | --- | --- | --- | --- |`);
-  console.log(`| ${rows.toLocaleString("en-US")} × ${columns} CSV | ${mb(bytes)} | ${(loadMs / 1000).toFixed(1)} | ${longest.toFixed(0)} | ${mb(peakMain)} | ${mb(memory)} | ${mb(table)} |`);
+  console.log(`| ${rows.toLocaleString("en-US")} × ${columns} CSV | ${mb(bytes)} | ${(loadMs / 1000).toFixed(1)} | ${longest.toFixed(0)} | ${mb(heap.peak())} | ${mb(memory)} | ${mb(table)} |`);
 } finally {
   await browser.close();
   await preview.stop();

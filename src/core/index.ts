@@ -61,6 +61,7 @@ export {
 } from "./cover/params.ts";
 export { suggestRadius, type RadiusBasis } from "./cover/suggestRadius.ts";
 export { excludeUndefinedRows } from "./cover/excludeUndefinedRows.ts";
+export type { CoverGraph } from "./cover/coverGraph.ts";
 export { prepareFeatures, type PreparedFeatures } from "./cover/prepareFeatures.ts";
 export { nodeMeans, nodeMembers } from "./cover/nodeMeans.ts";
 export { nodeMajority, nodeLevelShare } from "./cover/nodeCategories.ts";

@@ -1,39 +1,23 @@
-import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import { ballMembership, rowsToNodes } from "../graph/ballMembership.ts";
 import { components } from "../graph/components.ts";
-import { overlapEdges, type EdgeList } from "../graph/overlapEdges.ts";
+import { overlapEdges } from "../graph/overlapEdges.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
 import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
 import { maximinBalls } from "../search/maximinBalls.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { prepareFeatures } from "./prepareFeatures.ts";
+import type { CoverGraph } from "./coverGraph.ts";
+import { prepareFeatures, type PreparedFeatures } from "./prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "./params.ts";
 import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 
-export interface CoverResult {
+/** A build: its parameters, which rows went in or were left out and why (PreparedFeatures), and its graph. */
+export interface CoverResult extends Omit<PreparedFeatures, "table">, CoverGraph {
   readonly params: CoverParams;
   readonly rowsRead: number;
-  /** Parsed-table rows (0-based) that entered the build, ascending. */
-  readonly usedRows: Uint32Array;
-  /** Parsed-table rows left out for a missing feature value (policy "drop"), ascending. */
-  readonly droppedRows: Uint32Array;
-  /** Parsed-table rows left out because the metric is undefined on them (cosine: zero row; correlation: constant row). */
-  readonly undefinedRows: Uint32Array;
-  /** Values filled in per feature (policies "median" and "mean"). */
-  readonly imputed: Readonly<Record<string, number>>;
-  readonly constantColumns: readonly string[];
-  /** Landmark of node k (0-based) as a parsed-table row; node k is shown as k + 1. */
-  readonly landmarks: Uint32Array;
-  /** Members of node k as parsed-table rows, ascending. */
-  readonly members: CompressedLists;
-  readonly edges: EdgeList;
-  readonly component: Uint32Array;
-  readonly componentCount: number;
-  /** E − V + C: independent cycles of the graph (counts every triangle of mutually overlapping balls). */
-  readonly cycleRank: number;
   /** b0, b1 over GF(2) of the nerve's 2-skeleton; null when `loops: false`. */
   readonly betti: LoopCounts | null;
   /** Milliseconds per phase, by the clock passed in. */

@@ -12,6 +12,8 @@ export interface NerveBetti {
 }
 
 /**
+ * The full reduction over every triangle: the reference that the faster nerveLoops (used by
+ * builds and sweeps) is tested against; too slow for large nerves.
  * Betti numbers b0 and b1 over GF(2) of the 2-skeleton of the sampled nerve (vertices = nodes,
  * edges = pairs of balls sharing a row, triangles = triples sharing a row).
  * b1 = dim ker ∂1 − rank ∂2 = (E − (V − b0)) − rank ∂2, with rank ∂2 found by reducing the

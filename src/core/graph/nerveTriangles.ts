@@ -1,6 +1,8 @@
 import type { CompressedLists } from "./ballMembership.ts";
 
 /**
+ * Lists every triangle; builds use nerveLoops, which needs only fan triangles. Kept as the
+ * reference for tests and for exact triangle counts on small nerves.
  * Triangles of the sampled nerve: node triples a < b < c whose three balls share at least one
  * row, listed from each row's nodes (C(c, 3) triples for a row in c balls), deduplicated, sorted.
  * Returned flat: triangle t is (out[3t], out[3t + 1], out[3t + 2]). O(Σ_rows c³ + T log T).

@@ -1,23 +1,14 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CoverGraph } from "../cover/coverGraph.ts";
 import { components } from "../graph/components.ts";
-import { overlapEdges, type EdgeList } from "../graph/overlapEdges.ts";
+import { overlapEdges } from "../graph/overlapEdges.ts";
 import type { RunControl } from "./runControl.ts";
 import { nerveLoops, type LoopCounts } from "./nerveLoops.ts";
 import type { Balls } from "./netWithBalls.ts";
 import type { PreparedRows } from "./prepareRows.ts";
 
-/** The graph of one sweep radius, in the shape of CoverResult's graph fields (parsed-table rows). */
-export interface SweepCover {
+/** The graph of one sweep radius: the same graph fields as a single build (CoverGraph). */
+export interface SweepCover extends CoverGraph {
   readonly radius: number;
-  /** Landmark of node k as a parsed-table row, in the order chosen. */
-  readonly landmarks: Uint32Array;
-  /** Members of node k as parsed-table rows, ascending. */
-  readonly members: CompressedLists;
-  readonly edges: EdgeList;
-  readonly component: Uint32Array;
-  readonly componentCount: number;
-  /** E − V + C. */
-  readonly cycleRank: number;
   /** b0 and b1 of the nerve's 2-skeleton (b0 = componentCount). */
   readonly betti: LoopCounts;
 }

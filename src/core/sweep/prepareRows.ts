@@ -1,24 +1,16 @@
-import { prepareFeatures } from "../cover/prepareFeatures.ts";
+import { prepareFeatures, type PreparedFeatures } from "../cover/prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "../cover/params.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
-import type { NumericTable, ParsedTable } from "../table/types.ts";
+import type { ParsedTable } from "../table/types.ts";
 
 /** Every cover parameter but the radius: what a sweep holds fixed. */
 export type SweepParams = Omit<CoverParams, "radius">;
 
 /** The rows of a build, selected, scaled and weighted once, ready for any radius. */
-export interface PreparedRows {
+export interface PreparedRows extends PreparedFeatures {
   readonly metric: Metric;
-  /** Row-major scaled and weighted features of the rows that enter the build. */
-  readonly table: NumericTable;
-  /** Parsed-table row of each row of `table`, ascending. */
-  readonly usedRows: Uint32Array;
-  readonly droppedRows: Uint32Array;
-  readonly undefinedRows: Uint32Array;
-  readonly imputed: Readonly<Record<string, number>>;
-  readonly constantColumns: readonly string[];
   /** Candidate index over `table` under `metric`, built once and shared by every radius. */
   readonly index: RowIndex;
 }

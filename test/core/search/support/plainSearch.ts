@@ -48,20 +48,5 @@ export function plainMaximin(table: NumericTable, metric: Metric, radius: number
   return landmarks;
 }
 
-/** Edges a < b with the number of rows both balls hold, sorted by (a, b). */
-export function plainEdges(balls: readonly (readonly number[])[]): { source: number[]; target: number[]; shared: number[] } {
-  const source: number[] = [];
-  const target: number[] = [];
-  const shared: number[] = [];
-  for (let a = 0; a < balls.length; ++a) {
-    const inA = new Set(balls[a]);
-    for (let b = a + 1; b < balls.length; ++b) {
-      const count = balls[b]!.filter((row) => inA.has(row)).length;
-      if (count === 0) continue;
-      source.push(a);
-      target.push(b);
-      shared.push(count);
-    }
-  }
-  return { source, target, shared };
-}
+/** Edges a < b with the number of rows both balls hold, sorted by (a, b): the brute-force count shared with the other core tests. */
+export { bruteEdges as plainEdges } from "../../support/bruteForce.ts";

@@ -1,0 +1,43 @@
+// Probes shared by the browser benchmarks: long tasks on the main thread (PerformanceObserver
+// "longtask"), the main thread's JS heap (DevTools protocol Performance.getMetrics
+// JSHeapUsedSize, sampled every 100 ms), and memory of the page with its workers
+// (performance.measureUserAgentSpecificMemory, available because the page is cross-origin isolated).
+import type { Page } from "playwright-core";
+
+type Probed = { __longTasks: number[] };
+
+/** Call before the page loads: records every long task's duration. */
+export async function watchLongTasks(page: Page): Promise<void> {
+  await page.addInitScript(() => {
+    const w = window as unknown as Probed;
+    w.__longTasks = [];
+    new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask", buffered: true });
+  });
+}
+
+export const resetLongTasks = (page: Page): Promise<void> => page.evaluate(() => void ((window as unknown as Probed).__longTasks = []));
+export const longestTask = (page: Page): Promise<number> => page.evaluate(() => Math.max(0, ...(window as unknown as Probed).__longTasks));
+
+/** Starts sampling the main thread's JS heap; `peak()` is the largest sample, `stop()` ends sampling. */
+export async function sampleMainHeap(page: Page): Promise<{ peak: () => number; stop: () => void }> {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send("Performance.enable");
+  let peak = 0;
+  const timer = setInterval(() => {
+    void cdp
+      .send("Performance.getMetrics")
+      .then((r) => (peak = Math.max(peak, (r as { metrics: { name: string; value: number }[] }).metrics.find((m) => m.name === "JSHeapUsedSize")!.value)))
+      .catch(() => {});
+  }, 100);
+  return { peak: () => peak, stop: () => clearInterval(timer) };
+}
+
+/** Bytes used by the page and its workers, or NaN where the browser does not offer the measurement. */
+export function pageMemory(page: Page): Promise<number> {
+  return page
+    .evaluate(async () => {
+      const measure = (performance as unknown as { measureUserAgentSpecificMemory?: () => Promise<{ bytes: number }> }).measureUserAgentSpecificMemory;
+      return measure ? (await measure.call(performance)).bytes : NaN;
+    })
+    .catch(() => NaN);
+}
