@@ -94,7 +94,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds") return;
       set({ build: { ...store.getState().build, phase: progress.phase, fraction: progress.fraction } });
     });
-    if (answer.type === "cancelled") mark("shoal:build-cancelled");
+    mark(answer.type === "cancelled" ? "shoal:build-cancelled" : "shoal:build-answered");
     if (ticket !== latestBuild || answer.type === "cancelled") return;
     if (answer.type === "built") {
       set({ result: answer.result, selectedNode: null, regionNodes: [], build: { state: "done", phase: null, fraction: 1, error: null, elapsedMs: env.now() - started } });

@@ -17,6 +17,7 @@ export function ForceGraph() {
   const region = useWorkbench((s) => s.regionNodes);
   const canvas = useRef<HTMLCanvasElement>(null);
   const view = useRef<View | null>(null);
+  const marked = useRef<Layout | null>(null);
   const paint = useRef({ selected, fillOf: fillColors(fill), region });
   paint.current = { selected, fillOf: fillColors(fill), region };
 
@@ -35,12 +36,12 @@ export function ForceGraph() {
     view.current = fitTransform(layout, width, height);
     const { fillOf, selected: chosen, region: regionNodes } = paint.current;
     drawGraph(context, layout, view.current, { width, height, fillOf, selected: chosen, region: regionNodes });
+    if (marked.current !== layout) performance.mark("shoal:graph-drawn"); // the first drawing of this result's layout
+    marked.current = layout;
   }, []);
 
-  const layout = useForceLayout(result, draw);
-  useEffect(() => {
-    if (result) requestAnimationFrame(() => performance.mark("shoal:graph-drawn")); // after the first frame with this result
-  }, [result]);
+  const busy = useWorkbench((s) => s.build.state === "running" || s.stability.state === "running" || s.loadStatus === "loading");
+  const layout = useForceLayout(result, draw, busy);
   useEffect(() => {
     if (layout.current) draw(layout.current);
   }, [selected, fill, region, draw, layout]);

@@ -31,6 +31,8 @@ export interface Paint {
   readonly region: readonly number[];
 }
 
+const segmentsPerStroke = 256;
+
 export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, view: View, paint: Paint): void {
   context.clearRect(0, 0, paint.width, paint.height);
   context.save();
@@ -45,14 +47,17 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
     group.push(link);
   }
   context.strokeStyle = "rgba(70, 80, 95, 0.45)";
+  // …and at most 256 segments per stroke: one path of thousands of crossing segments is slow to rasterise
   for (const [width, links] of widthClasses) {
     context.lineWidth = (0.6 + width) / view.k;
-    context.beginPath();
-    for (const link of links) {
-      context.moveTo(link.source.x, link.source.y);
-      context.lineTo(link.target.x, link.target.y);
+    for (let first = 0; first < links.length; first += segmentsPerStroke) {
+      context.beginPath();
+      for (const link of links.slice(first, first + segmentsPerStroke)) {
+        context.moveTo(link.source.x, link.source.y);
+        context.lineTo(link.target.x, link.target.y);
+      }
+      context.stroke();
     }
-    context.stroke();
   }
   for (const node of layout.nodes) {
     context.fillStyle = paint.fillOf(node.index);

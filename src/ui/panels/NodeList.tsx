@@ -1,3 +1,4 @@
+import { useDeferredValue, useMemo } from "react";
 import { actions } from "../../state/actions.ts";
 import { selectNodeColorValues } from "../../state/selectors.ts";
 import { formatNumber, plural } from "../format.ts";
@@ -6,10 +7,13 @@ import { useWorkbench } from "../useWorkbench.ts";
 
 /** Keyboard route to every node: a native list box (arrow keys move, the choice opens the node). */
 export function NodeList() {
-  const result = useWorkbench((s) => s.result);
+  const latest = useWorkbench((s) => s.result);
   const selected = useWorkbench((s) => s.selectedNode);
-  const colors = useWorkbench(selectNodeColorValues);
-  const colorBy = useWorkbench((s) => s.colorBy);
+  const latestColors = useWorkbench(selectNodeColorValues);
+  const latestColorBy = useWorkbench((s) => s.colorBy);
+  // a thousand options are rendered in the background (interruptible), not in the task that brought the result
+  const shown = useMemo(() => ({ result: latest, colors: latestColors, colorBy: latestColorBy }), [latest, latestColors, latestColorBy]);
+  const { result, colors, colorBy } = useDeferredValue(shown);
   if (!result) return null;
   const { offsets } = result.members;
   if (result.landmarks.length > maxDrawnNodes) {
