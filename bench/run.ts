@@ -3,6 +3,7 @@
 // tests. Each radius is calibrated so that the greedy file-order net has 1,000 ± 10 % landmarks.
 // On the 10,000-row cases the plain computation (bench/plainCover.ts) is timed too and checked
 // to give identical landmarks, balls and edges. --quick (or SHOAL_BENCH_QUICK=1) runs those only.
+// Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON).
 import { mkdir, writeFile } from "node:fs/promises";
 import { cpus, loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
@@ -112,3 +113,6 @@ console.log(line(widths.map((w) => "-".repeat(w))));
 for (const row of table) console.log(line(headers.map((h) => cell(row, h))));
 await mkdir(new URL("./results/", import.meta.url), { recursive: true });
 await writeFile(new URL("./results/latest.json", import.meta.url), `${JSON.stringify({ node: process.version, quick, note, rows: table }, null, 2)}\n`);
+
+console.log("");
+await import("./sweep.ts"); // prints the sweep table, writes bench/results/sweep.json

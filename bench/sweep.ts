@@ -1,8 +1,9 @@
-// npx tsx bench/sweep.ts [--quick]: times a 24-step radius sweep against the 24 separate buildCover
-// calls it replaces, at the same radii (the default range of each table), and checks that both
-// give the same figures at every radius. Timings live here, never in tests. Each figure is the
-// median of `repeats` runs after one warm-up sweep; --quick skips the 100,000-row table.
-import { readFile } from "node:fs/promises";
+// npx tsx bench/sweep.ts [--quick], also run at the end of `npm run bench`: times a 24-step
+// radius sweep against the 24 separate buildCover calls it replaces, at the same radii (the
+// default range of each table), and checks that both give the same figures at every radius.
+// Timings live here, never in tests. Each figure is the median of `repeats` runs after one
+// warm-up sweep; --quick skips the 100,000-row table.
+import { mkdir, readFile, writeFile } from "node:fs/promises";
 import { performance } from "node:perf_hooks";
 import { buildCover, parseCsvText, type LandmarkRule, type MetricName, type ParsedTable } from "../src/core/index.ts";
 import { radiusSweep, type RadiusSweep } from "../src/core/sweep/radiusSweep.ts";
@@ -17,7 +18,7 @@ interface Case {
   readonly repeats: number;
 }
 
-const quick = process.argv.includes("--quick");
+const quick = process.argv.includes("--quick") || process.env.SHOAL_BENCH_QUICK === "1";
 const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 const clock = (): number => performance.now();
 
@@ -85,3 +86,5 @@ console.log(`radius sweep vs separate builds, median of the stated repeats, Node
 console.log(line(headers));
 console.log(line(widths.map((w) => "-".repeat(w))));
 for (const r of rows) console.log(line(headers.map((h) => String(r[h]))));
+await mkdir(new URL("./results/", import.meta.url), { recursive: true });
+await writeFile(new URL("./results/sweep.json", import.meta.url), `${JSON.stringify({ node: process.version, quick, rows }, null, 2)}\n`);
