@@ -2,9 +2,10 @@
 // driven by playwright-core, against the same build in Node. Prints a table (and writes
 // bench/results/browser.json). Probes: User Timing marks the app sets (build requested → first
 // frame drawn with the result; Cancel → "cancelled" answer), a PerformanceObserver for long tasks
-// on the main thread, and memory from performance.measureUserAgentSpecificMemory() (the page is
-// cross-origin isolated; it counts the worker too) plus the DevTools protocol's
-// Performance.getMetrics JSHeapUsedSize (main thread only). Build times are medians of three:
+// on the main thread, the worker's memory from the DevTools protocol's Runtime.getHeapUsage
+// (JS heap + array buffer contents, sampled every 50 ms during the builds; it includes the table,
+// which the worker shares with the main thread) and the main thread's from its
+// Performance.getMetrics JSHeapUsedSize (typed-array contents not included). Build times are medians of three:
 // three warm builds in Node, three requests in the page (the radius nudged by 10⁻¹² so each is a
 // new request with the same graph); "request→answer" is the worker's part, "→drawn" adds the
 // main thread's render and the first drawing. Long tasks are reported for the load (file chosen
@@ -15,7 +16,7 @@ import { join } from "node:path";
 import { performance as nodePerformance } from "node:perf_hooks";
 import { buildCover, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
 import { launchBrowser, startPreview } from "../test/browser/harness.ts";
-import { longestTask, pageMemory, resetLongTasks, sampleMainHeap, watchLongTasks } from "./browserProbes.ts";
+import { longestTask, resetLongTasks, sampleMainHeap, sampleWorkerMemory, watchLongTasks } from "./browserProbes.ts";
 import { calibrateRadius } from "./calibrateRadius.ts";
 import { gaussianClusters } from "./syntheticTables.ts";
 
@@ -68,6 +69,7 @@ try {
     const browser = await launchBrowser();
     const { page } = browser;
     await watchLongTasks(page);
+    const workerMemory = await sampleWorkerMemory(page);
     await page.goto(preview.url);
     await page.getByTestId("node-count").waitFor();
     const heap = await sampleMainHeap(page);
@@ -83,6 +85,7 @@ try {
 
     // builds at r, r(1 + 10⁻¹²), r(1 + 2·10⁻¹²): the same graph, three requests; long tasks from the first request until 1 s after the last drawing
     await resetLongTasks(page);
+    workerMemory.reset();
     const answered: number[] = [];
     const drawn: number[] = [];
     let nodes = 0;
@@ -105,7 +108,7 @@ try {
     const answeredMs = median(answered);
     const drawnMs = median(drawn);
     const longest = await longestTask(page);
-    const memory = await pageMemory(page);
+    const workerPeak = workerMemory.peak();
 
     // cancel: start a build at half the radius (several times the landmarks), cancel it, time the worker's answer
     await page.evaluate(() => performance.clearMarks());
@@ -132,6 +135,7 @@ try {
     await page.waitForFunction(() => !document.querySelector("[data-testid=build-progress]"), undefined, { timeout: 600_000 });
     const survived = (await page.getByTestId("node-count").count()) === 1;
     heap.stop();
+    workerMemory.stop();
     await browser.close();
 
     const tableBytes = c.table.rows * features.length * 8;
@@ -150,7 +154,7 @@ try {
       "longest main task in builds ms": longest.toFixed(0),
       "cancel→answer ms": cancelMs.toFixed(0),
       "table survives cancel": survived ? "yes" : "NO",
-      "memory after build ÷ table": (memory / tableBytes).toFixed(2),
+      "worker peak in builds ÷ table": (workerPeak / tableBytes).toFixed(2),
       "main heap peak ÷ table": (heap.peak() / tableBytes).toFixed(2),
     });
   }

@@ -41,3 +41,49 @@ export function pageMemory(page: Page): Promise<number> {
     })
     .catch(() => NaN);
 }
+
+/**
+ * Samples the memory of the page's worker every 50 ms through the DevTools protocol: the page's
+ * session auto-attaches to workers and sends them Runtime.getHeapUsage (answered between the
+ * worker's own steps, so a long build is sampled while it runs). A sample is usedSize (JS heap)
+ * + backingStorageSize (ArrayBuffer and SharedArrayBuffer contents), the browser's counterpart
+ * of Node's heapUsed + arrayBuffers; uncollected garbage counts, as it does in Node.
+ * Call before page.goto. `reset()` starts a new peak; `peak()` is the largest sample since.
+ */
+export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => void; peak: () => number; stop: () => void }> {
+  const cdp = await page.context().newCDPSession(page);
+  let session: string | null = null;
+  let nextId = 1;
+  const waiting = new Map<number, (usage: HeapUsage | undefined) => void>();
+  cdp.on("Target.attachedToTarget", (event) => {
+    if (event.targetInfo.type === "worker") session = event.sessionId;
+  });
+  cdp.on("Target.receivedMessageFromTarget", (event) => {
+    const message = JSON.parse(event.message) as { id?: number; result?: HeapUsage };
+    if (message.id === undefined) return;
+    waiting.get(message.id)?.(message.result);
+    waiting.delete(message.id);
+  });
+  await cdp.send("Target.setAutoAttach", { autoAttach: true, waitForDebuggerOnStart: false, flatten: false });
+  let peak = 0;
+  let busy = false;
+  const timer = setInterval(() => {
+    if (!session || busy) return;
+    busy = true;
+    const id = nextId++;
+    new Promise<HeapUsage | undefined>((resolve) => {
+      waiting.set(id, resolve);
+      cdp.send("Target.sendMessageToTarget", { sessionId: session!, message: JSON.stringify({ id, method: "Runtime.getHeapUsage" }) }).catch(() => resolve(undefined));
+    })
+      .then((usage) => {
+        if (usage) peak = Math.max(peak, usage.usedSize + (usage.backingStorageSize ?? 0));
+      })
+      .finally(() => (busy = false));
+  }, 50);
+  return { reset: () => (peak = 0), peak: () => peak, stop: () => clearInterval(timer) };
+}
+
+interface HeapUsage {
+  readonly usedSize: number;
+  readonly backingStorageSize?: number;
+}

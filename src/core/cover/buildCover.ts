@@ -1,7 +1,8 @@
-import { ballMembership, rowsToNodes } from "../graph/ballMembership.ts";
+import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
 import { components } from "../graph/components.ts";
 import { overlapEdges } from "../graph/overlapEdges.ts";
 import { maybeMetric } from "../metric/metrics.ts";
+import type { Metric } from "../metric/types.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
 import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
 import { maximinBalls } from "../search/maximinBalls.ts";
@@ -9,7 +10,7 @@ import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
 import type { CoverGraph } from "./coverGraph.ts";
 import { prepareFeatures, type PreparedFeatures } from "./prepareFeatures.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "./params.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule, type MissingPolicy } from "./params.ts";
 import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
@@ -60,22 +61,8 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     return elapsed;
   };
   onProgress?.("scale", 0);
-  const prepared = prepareFeatures(parsed, params, metric, missing);
-  const table = prepared.table;
-  const scaleTime = lap();
-
-  onProgress?.("landmarks", 0);
-  const index = createRowIndex(table, metric);
-  const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
-  const centers = net.landmarks;
-  const landmarkTime = lap();
-
-  onProgress?.("members", 0);
-  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
-  const local = net.members ?? ballMembership(table, metric, params.radius, centers, membersProgress, { index });
-  // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
-  if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
-  const rowNodes = rowsToNodes(local, table.rows);
+  const { centers, local, prepared, scaleTime, landmarkTime } = landmarksAndBalls(parsed, params, metric, missing, rule, lap, onProgress);
+  const rowNodes = rowsToNodes(local, prepared.rows);
   const memberTime = lap();
 
   onProgress?.("edges", 0);
@@ -91,6 +78,9 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const loopTime = lap();
 
   const toParsedRow = (i: number): number => prepared.usedRows[i]!;
+  // the lists are this build's own: renumber their rows in place rather than beside a copy
+  const items = local.items;
+  for (let t = 0; t < items.length; ++t) items[t] = prepared.usedRows[items[t]!]!;
   return {
     params: { ...params, features: [...params.features], ...(params.oneHot ? { oneHot: [...params.oneHot] } : {}) },
     rowsRead: parsed.rows,
@@ -100,7 +90,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     imputed: prepared.imputed,
     constantColumns: prepared.constantColumns,
     landmarks: centers.map(toParsedRow),
-    members: { offsets: local.offsets, items: local.items.map(toParsedRow) },
+    members: { offsets: local.offsets, items },
     edges,
     component,
     componentCount: count,
@@ -108,6 +98,37 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     betti,
     timings: { scale: scaleTime, landmarks: landmarkTime, members: memberTime, edges: edgeTime, components: componentTime, loops: loopTime },
   };
+}
+
+/**
+ * The scaled rows, their index, the landmarks and their balls, in a function of their own so that
+ * the scaled rows and the index (each the size of the table) can be freed before edges and loops.
+ * Laps the clock after scaling and after the net; the balls are timed by the caller.
+ */
+function landmarksAndBalls(
+  parsed: ParsedTable,
+  params: CoverParams,
+  metric: Metric,
+  missing: MissingPolicy,
+  rule: LandmarkRule,
+  lap: () => number,
+  onProgress: BuildOptions["onProgress"],
+): { centers: Uint32Array; local: CompressedLists; prepared: Omit<PreparedFeatures, "table"> & { rows: number }; scaleTime: number; landmarkTime: number } {
+  const { table, ...prepared } = prepareFeatures(parsed, params, metric, missing);
+  const scaleTime = lap();
+
+  onProgress?.("landmarks", 0);
+  const index = createRowIndex(table, metric);
+  const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
+  const centers = net.landmarks;
+  const landmarkTime = lap();
+
+  onProgress?.("members", 0);
+  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
+  const local = net.members ?? ballMembership(table, metric, params.radius, centers, membersProgress, { index });
+  // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
+  if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
+  return { centers, local, prepared: { ...prepared, rows: table.rows }, scaleTime, landmarkTime };
 }
 
 /** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */

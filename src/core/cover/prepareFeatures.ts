@@ -33,7 +33,8 @@ export function prepareFeatures(parsed: ParsedTable, params: Pick<CoverParams, "
   let usedRows = selection.usedRows;
   let droppedRows = selection.droppedRows;
   const imputed: Record<string, number> = { ...selection.imputed };
-  const scaled = params.features.length > 0 ? scaleTable(selection.table, params.scale, numericWeights) : { table: selection.table, constantColumns: [] };
+  // selectFeatures made this table for us alone: scale it in place rather than beside a copy
+  const scaled = params.features.length > 0 ? scaleTable(selection.table, params.scale, numericWeights, true) : { table: selection.table, constantColumns: [] };
   let table = scaled.table;
   if (encoded.length > 0) {
     const keep = new Uint8Array(usedRows.length).fill(1);

@@ -4,11 +4,13 @@ import type { ScaledTable } from "./zScore.ts";
 /**
  * Applies x ← (x − center) / spread per column, where `fit` gives (center, spread) from the
  * column's values. A column whose spread is not positive is constant for this scaling: it
- * becomes all 0 and is named in `constantColumns`. O(n·d) plus the cost of `fit`.
+ * becomes all 0 and is named in `constantColumns`. Writes into `into` (default a new array; it may
+ * be `input.values` itself: each column is copied out before it is overwritten). O(n·d) plus `fit`.
  */
-export function columnTransform(input: NumericTable, fit: (column: Float64Array) => { center: number; spread: number }): ScaledTable {
+export function columnTransform(input: NumericTable, into: Float64Array | undefined, fit: (column: Float64Array) => { center: number; spread: number }): ScaledTable {
   const { rows: n, columns: d, values } = input;
-  const out = new Float64Array(values.length);
+  const out = into ?? new Float64Array(values.length);
+  if (out.length !== values.length) throw new Error(`scaling target holds ${out.length} values, not ${values.length}`);
   const constantColumns: string[] = [];
   const column = new Float64Array(n);
   for (let j = 0; j < d; ++j) {
@@ -16,7 +18,8 @@ export function columnTransform(input: NumericTable, fit: (column: Float64Array)
     const { center, spread } = fit(column);
     if (!(spread > 0)) {
       constantColumns.push(input.names[j]!);
-      continue; // stays 0
+      for (let i = 0; i < n; ++i) out[i * d + j] = 0;
+      continue;
     }
     for (let i = 0; i < n; ++i) out[i * d + j] = (column[i]! - center) / spread;
   }

@@ -8,8 +8,8 @@ import type { ScaledTable } from "./zScore.ts";
  * A constant column (max = min) becomes 0 and is reported. O(n·d).
  * @example minMax({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(2, 4, 6) }).table.values // => Float64Array [0, 0.5, 1]
  */
-export function minMax(input: NumericTable): ScaledTable {
-  return columnTransform(input, (column) => {
+export function minMax(input: NumericTable, into?: Float64Array): ScaledTable {
+  return columnTransform(input, into, (column) => {
     let lo = Infinity;
     let hi = -Infinity;
     for (const x of column) {

@@ -15,8 +15,8 @@ export interface ScaledTable {
  * table (s is undefined there). O(n·d); returns a new table.
  * @example zScore({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3) }).table.values // => Float64Array [-1, 0, 1]
  */
-export function zScore(input: NumericTable): ScaledTable {
-  return columnTransform(input, (column) => {
+export function zScore(input: NumericTable, into?: Float64Array): ScaledTable {
+  return columnTransform(input, into, (column) => {
     let mean = 0;
     let m2 = 0;
     for (let i = 0; i < column.length; ++i) {

@@ -1,30 +1,44 @@
 import type { CompressedLists } from "../graph/ballMembership.ts";
 
-/** Lists appended one after another into a growing buffer, then frozen as compressed lists. */
+/**
+ * Lists appended one after another into fixed-size chunks, then copied once into one buffer.
+ * Chunks rather than a doubling buffer: at most the lists twice over (chunks and result) are
+ * held at the end, where doubling and trimming can hold three times the lists for a moment.
+ */
 export interface ListBuilder {
   offsets: number[];
-  items: Uint32Array;
+  /** Full chunks, each trimmed to what was written. */
+  readonly chunks: Uint32Array[];
+  current: Uint32Array;
+  /** Values written into `current`, and in all lists so far. */
+  used: number;
   size: number;
 }
 
 export function createListBuilder(capacity: number): ListBuilder {
-  return { offsets: [0], items: new Uint32Array(Math.max(16, capacity)), size: 0 };
+  return { offsets: [0], chunks: [], current: new Uint32Array(Math.max(1 << 16, capacity)), used: 0, size: 0 };
 }
 
-/** Appends one list; the buffer doubles when full. Amortised O(length). */
+/** Appends one list. Amortised O(length). */
 export function appendList(builder: ListBuilder, list: Uint32Array): void {
-  const needed = builder.size + list.length;
-  if (needed > builder.items.length) {
-    const grown = new Uint32Array(Math.max(needed, 2 * builder.items.length));
-    grown.set(builder.items.subarray(0, builder.size));
-    builder.items = grown;
+  if (builder.used + list.length > builder.current.length) {
+    builder.chunks.push(builder.current.subarray(0, builder.used));
+    builder.current = new Uint32Array(Math.max(builder.current.length, list.length));
+    builder.used = 0;
   }
-  builder.items.set(list, builder.size);
-  builder.size = needed;
-  builder.offsets.push(needed);
+  builder.current.set(list, builder.used);
+  builder.used += list.length;
+  builder.size += list.length;
+  builder.offsets.push(builder.size);
 }
 
 /** The lists so far, as compressed lists with their own buffers. O(total length). */
 export function finishLists(builder: ListBuilder): CompressedLists {
-  return { offsets: Uint32Array.from(builder.offsets), items: builder.items.slice(0, builder.size) };
+  const items = new Uint32Array(builder.size);
+  let at = 0;
+  for (const chunk of [...builder.chunks, builder.current.subarray(0, builder.used)]) {
+    items.set(chunk, at);
+    at += chunk.length;
+  }
+  return { offsets: Uint32Array.from(builder.offsets), items };
 }

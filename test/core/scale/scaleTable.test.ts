@@ -97,3 +97,39 @@ describe("scaleTable weights", () => {
     expect(() => scaleTable(input, "zscore", { c: 2 })).toThrow("weight for a column that is not a feature: c");
   });
 });
+
+describe("scaleTable in place (overwrite)", () => {
+  const scales: ScaleName[] = ["none", "zscore", "minmax", "robust"];
+  const matrix = fc
+    .record({ rows: fc.integer({ min: 1, max: 30 }), columns: fc.integer({ min: 1, max: 4 }) })
+    .chain(({ rows, columns }) =>
+      fc.record({
+        rows: fc.constant(rows),
+        columns: fc.constant(columns),
+        // some columns constant, so the zeroing of constant columns is written over old values too
+        values: fc.array(fc.oneof(fc.constant(3), fc.integer({ min: -1000, max: 1000 }).map((k) => k / 8)), { minLength: rows * columns, maxLength: rows * columns }),
+        weight: fc.constantFrom(1, 0, 2.5),
+        scale: fc.constantFrom(...scales),
+      }),
+    );
+  it("gives bit for bit the values of the copying call, written over the input's own array", () => {
+    fc.assert(
+      fc.property(matrix, ({ rows, columns, values, weight, scale }) => {
+        const names = Array.from({ length: columns }, (_, j) => `c${j}`);
+        const weights = { c0: weight };
+        const copied = scaleTable(table(rows, columns, names, values), scale, weights);
+        const input = table(rows, columns, names, values);
+        const inPlace = scaleTable(input, scale, weights, true);
+        expect(inPlace.table.values).toBe(input.values);
+        expect(Array.from(inPlace.table.values)).toEqual(Array.from(copied.table.values));
+        expect(inPlace.constantColumns).toEqual(copied.constantColumns);
+      }),
+    );
+  });
+  it("leaves the input untouched without overwrite", () => {
+    const input = table(3, 2, ["a", "b"], [1, 5, 2, 5, 4, 5]);
+    scaleTable(input, "zscore", { a: 2 });
+    scaleTable(input, "none", { a: 2 });
+    expect(Array.from(input.values)).toEqual([1, 5, 2, 5, 4, 5]);
+  });
+});
