@@ -1,4 +1,7 @@
-import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import { ballMembership, rowsToNodes, transposeLists, type CompressedLists } from "../graph/ballMembership.ts";
+import { blockMembershipInto } from "../search/blockMembership.ts";
+import { createListBuilder, listPieces } from "../search/listBuilder.ts";
+import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../graph/components.ts";
 import { overlapEdges } from "../graph/overlapEdges.ts";
 import { maybeMetric } from "../metric/metrics.ts";
@@ -61,8 +64,14 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     return elapsed;
   };
   onProgress?.("scale", 0);
-  const { centers, local, prepared, scaleTime, landmarkTime } = landmarksAndBalls(parsed, params, metric, missing, rule, lap, onProgress);
-  const rowNodes = rowsToNodes(local, prepared.rows);
+  const found = landmarksAndBalls(parsed, params, metric, missing, rule, lap, onProgress);
+  const { centers, prepared, scaleTime, landmarkTime } = found;
+  // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
+  // transpose back, made after the lists by tree position are let go
+  const rowNodes = rowNodesOf(found.balls!, prepared.rows);
+  const rowLists = found.balls!.kind === "rows" ? found.balls!.lists : null;
+  found.balls = null;
+  const local = rowLists ?? rowsToNodes(rowNodes, centers.length);
   const memberTime = lap();
 
   onProgress?.("edges", 0);
@@ -100,10 +109,28 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   };
 }
 
+/** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) in chunks as they were found. */
+type FoundBalls =
+  | { readonly kind: "rows"; readonly lists: CompressedLists }
+  | { readonly kind: "positions"; readonly offsets: readonly number[]; readonly pieces: readonly Uint32Array[]; readonly rowAt: Uint32Array };
+
+interface FoundNet {
+  /** Landmark rows (of the prepared table), in the order chosen. */
+  readonly centers: Uint32Array;
+  /** Dropped by the caller once transposed, so that the lists by position can be freed. */
+  balls: FoundBalls | null;
+  readonly prepared: Omit<PreparedFeatures, "table"> & { readonly rows: number };
+  readonly scaleTime: number;
+  readonly landmarkTime: number;
+}
+
 /**
  * The scaled rows, their index, the landmarks and their balls, in a function of their own so that
- * the scaled rows and the index (each the size of the table) can be freed before edges and loops.
- * Laps the clock after scaling and after the net; the balls are timed by the caller.
+ * the scaled rows and the index can be freed before edges and loops. Greedy and random nets run
+ * on the index in tree order (search/treeOrderIndex.ts), which holds the only scaled copy of the
+ * table, and keep their balls as found (no final copy); maximin keeps row numbers, because its
+ * ties go to the lowest row. Laps the clock after scaling and after the net; the caller times
+ * the balls, which it turns into lists by row.
  */
 function landmarksAndBalls(
   parsed: ParsedTable,
@@ -113,22 +140,50 @@ function landmarksAndBalls(
   rule: LandmarkRule,
   lap: () => number,
   onProgress: BuildOptions["onProgress"],
-): { centers: Uint32Array; local: CompressedLists; prepared: Omit<PreparedFeatures, "table"> & { rows: number }; scaleTime: number; landmarkTime: number } {
-  const { table, ...prepared } = prepareFeatures(parsed, params, metric, missing);
+): FoundNet {
+  const { table, ...rest } = prepareFeatures(parsed, params, metric, missing);
+  const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
+  const n = table.rows;
+  const netProgress = (done: number, total: number): void => onProgress?.("landmarks", done / total);
+  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
 
   onProgress?.("landmarks", 0);
-  const index = createRowIndex(table, metric);
+  const indexOptions = { onStep: () => onProgress?.("landmarks", 0) }; // a chance to cancel while the tree is built
+  const ordered = rule === "maximin" ? null : treeOrderIndex(table, metric, indexOptions); // `table` is rearranged from here on
+  if (ordered?.rowAt) {
+    const { index, rowAt } = ordered;
+    // visit the rows in file order (or the seed's order) at their tree positions
+    const positionOf = new Uint32Array(n);
+    for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
+    const order = rule === "random" ? shuffledOrder(n, randomSource(params.seed)).map((row) => positionOf[row]!) : positionOf;
+    let lists = createListBuilder(n);
+    const net = greedyBalls(index, params.radius, order, { onProgress: netProgress, into: lists });
+    const landmarkTime = lap();
+    onProgress?.("members", 0);
+    if (lists.offsets.length - 1 === net.landmarks.length) {
+      // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
+      for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
+    } else {
+      lists = createListBuilder(n);
+      blockMembershipInto(lists, index, params.radius, net.landmarks, membersProgress);
+    }
+    const centers = net.landmarks.map((p) => rowAt[p]!);
+    return { centers, balls: { kind: "positions", offsets: lists.offsets, pieces: listPieces(lists), rowAt }, prepared, scaleTime, landmarkTime };
+  }
+  const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
   const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
   const centers = net.landmarks;
   const landmarkTime = lap();
-
   onProgress?.("members", 0);
-  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
-  const local = net.members ?? ballMembership(table, metric, params.radius, centers, membersProgress, { index });
-  // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
+  const lists = net.members ?? ballMembership(index.table, metric, params.radius, centers, membersProgress, { index });
   if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
-  return { centers, local, prepared: { ...prepared, rows: table.rows }, scaleTime, landmarkTime };
+  return { centers, balls: { kind: "rows", lists }, prepared, scaleTime, landmarkTime };
+}
+
+/** For each row, the nodes whose balls hold it, ascending. */
+function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
+  return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeLists(balls.offsets, balls.pieces, rows, balls.rowAt);
 }
 
 /** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */

@@ -42,15 +42,34 @@ export function ballMembership(
  * Transposes node → rows lists into row → nodes lists (nodes ascending for each row). O(m) for m memberships.
  */
 export function rowsToNodes(members: CompressedLists, rows: number): CompressedLists {
+  return transposeLists(members.offsets, [members.items], rows);
+}
+
+/**
+ * The transpose of lists whose items are the concatenation of `pieces` (list k holds items
+ * offsets[k]..offsets[k+1]−1): for each of `rows` rows, the lists holding it, ascending. With
+ * `rowOf`, item x stands for row rowOf[x] (items numbered in another order, e.g. tree positions).
+ * Transposing twice gives the lists with their rows ascending. O(m + rows) for m items.
+ * @example transposeLists([0, 2, 3], [Uint32Array.of(1, 0), Uint32Array.of(0)], 2).items // => Uint32Array [0, 1, 0]
+ */
+export function transposeLists(offsets: ArrayLike<number>, pieces: readonly Uint32Array[], rows: number, rowOf?: Uint32Array): CompressedLists {
+  const row = (x: number): number => (rowOf ? rowOf[x]! : x);
   const counts = new Uint32Array(rows + 1);
-  for (let t = 0; t < members.items.length; ++t) counts[members.items[t]! + 1]!++;
-  for (let i = 0; i < rows; ++i) counts[i + 1]! += counts[i]!;
-  const offsets = counts.slice();
-  const cursor = counts.slice(0, rows);
-  const items = new Uint32Array(members.items.length);
-  const nodes = members.offsets.length - 1;
-  for (let k = 0; k < nodes; ++k) {
-    for (let t = members.offsets[k]!; t < members.offsets[k + 1]!; ++t) items[cursor[members.items[t]!]!++] = k;
+  let total = 0;
+  for (const piece of pieces) {
+    for (let t = 0; t < piece.length; ++t) counts[row(piece[t]!) + 1]!++;
+    total += piece.length;
   }
-  return { offsets, items };
+  for (let i = 0; i < rows; ++i) counts[i + 1]! += counts[i]!;
+  const cursor = counts.slice(0, rows);
+  const items = new Uint32Array(total);
+  let k = 0;
+  let at = 0; // index of the item in the concatenation
+  for (const piece of pieces) {
+    for (let t = 0; t < piece.length; ++t, ++at) {
+      while (at >= offsets[k + 1]!) ++k;
+      items[cursor[row(piece[t]!)]!++] = k;
+    }
+  }
+  return { offsets: counts, items };
 }

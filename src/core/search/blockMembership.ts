@@ -37,10 +37,16 @@ interface Pass {
  * @example blockMembership(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 2)) // => offsets [0, 2, 5], items [0, 1, 1, 2, 3]
  */
 export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): CompressedLists {
+  const builder = createListBuilder(index.table.rows);
+  blockMembershipInto(builder, index, radius, landmarks, onProgress);
+  return finishLists(builder);
+}
+
+/** blockMembership's lists appended to `builder`, one per landmark in order (no final copy). */
+export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): void {
   const { table, space, tree } = index;
   if (!space || !tree) throw new Error("blockMembership needs a search space");
   const d = table.columns;
-  const builder = createListBuilder(table.rows);
   judgeRadius(index, radius);
   const pass: Pass = {
     index,
@@ -73,7 +79,6 @@ export function blockMembership(index: RowIndex, radius: number, landmarks: Uint
     appendGroup(builder, pass.pairs, pass.size, group);
     if (onProgress && group === chunk) onProgress(first + chunk, landmarks.length);
   }
-  return finishLists(builder);
 }
 
 /** Filters the level's landmark list by the node's box, then recurses, or scans the leaf. */

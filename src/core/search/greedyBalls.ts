@@ -1,7 +1,7 @@
 import type { CompressedLists } from "../graph/ballMembership.ts";
 import { ballRows } from "./ballRows.ts";
 import { firstHitNet } from "./firstHitNet.ts";
-import { appendList, createListBuilder, finishLists } from "./listBuilder.ts";
+import { appendList, createListBuilder, finishLists, type ListBuilder } from "./listBuilder.ts";
 import type { RowIndex } from "./rowIndex.ts";
 
 export interface GreedyBallsOptions {
@@ -10,6 +10,12 @@ export interface GreedyBallsOptions {
   onProgress?: (done: number, total: number) => void;
   /** Stop as soon as the net has more than this many landmarks (for radius searches; default no limit). */
   maxLandmarks?: number;
+  /**
+   * Append the balls to this builder instead of returning them (`members` is then null). When the
+   * net switched to first-hit tests it holds the balls of the first landmarks only: the caller
+   * sees that by its list count and finds the balls afresh.
+   */
+  into?: ListBuilder;
 }
 
 export interface NetWithBalls {
@@ -34,11 +40,11 @@ export interface NetWithBalls {
  * @example greedyBalls(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 1, 2, 3)).landmarks // => Uint32Array [0, 2]
  */
 export function greedyBalls(index: RowIndex, radius: number, order: ArrayLike<number>, options: GreedyBallsOptions = {}): NetWithBalls {
-  const { balls = true, onProgress, maxLandmarks = Infinity } = options;
+  const { balls = true, onProgress, maxLandmarks = Infinity, into } = options;
   const n = index.table.rows;
   const covered = new Uint8Array(n);
   const landmarks: number[] = [];
-  const builder = balls ? createListBuilder(n) : null;
+  const builder = into ?? (balls ? createListBuilder(n) : null);
   const before = { ...index.stats };
   const probe = index.tree ? 4 : 1; // queries before judging the index
   for (let k = 0; k < order.length; ++k) {
@@ -57,5 +63,5 @@ export function greedyBalls(index: RowIndex, radius: number, order: ArrayLike<nu
     }
     if (onProgress && (k & 255) === 255) onProgress(k + 1, order.length);
   }
-  return { landmarks: Uint32Array.from(landmarks), members: builder && finishLists(builder) };
+  return { landmarks: Uint32Array.from(landmarks), members: builder && !into ? finishLists(builder) : null };
 }

@@ -32,11 +32,16 @@ export function appendList(builder: ListBuilder, list: Uint32Array): void {
   builder.offsets.push(builder.size);
 }
 
+/** The lists' items so far, in order, as views of the chunks (no copy). */
+export function listPieces(builder: ListBuilder): Uint32Array[] {
+  return [...builder.chunks, builder.current.subarray(0, builder.used)];
+}
+
 /** The lists so far, as compressed lists with their own buffers. O(total length). */
 export function finishLists(builder: ListBuilder): CompressedLists {
   const items = new Uint32Array(builder.size);
   let at = 0;
-  for (const chunk of [...builder.chunks, builder.current.subarray(0, builder.used)]) {
+  for (const chunk of listPieces(builder)) {
     items.set(chunk, at);
     at += chunk.length;
   }

@@ -35,6 +35,8 @@ export interface RowIndex {
 export interface RowIndexOptions {
   /** Rows per k-d tree leaf (default 32). */
   leafSize?: number;
+  /** Called now and then while the tree is built (kdTree's onStep), e.g. to check for cancellation. */
+  onStep?: () => void;
 }
 
 /**
@@ -44,7 +46,12 @@ export interface RowIndexOptions {
  */
 export function createRowIndex(table: NumericTable, metric: Metric, options: RowIndexOptions = {}): RowIndex {
   const space = searchSpace(table, metric);
-  const tree = space && kdTree(space.points, space.dims, table.rows, options.leafSize ?? defaultLeafSize);
+  const tree = space && kdTree(space.points, space.dims, table.rows, options.leafSize ?? defaultLeafSize, options.onStep ? { onStep: options.onStep } : {});
+  return rowIndexOf(table, metric, space, tree);
+}
+
+/** An index over given parts (a space and a tree over its points, or neither), with fresh scratch and counters. */
+export function rowIndexOf(table: NumericTable, metric: Metric, space: SearchSpace | null, tree: KdTree | null): RowIndex {
   return {
     table,
     metric,

@@ -26,7 +26,7 @@ export interface RegionTrack {
 export function regionStability(parsed: ParsedTable, params: SweepParams, selection: ArrayLike<number>, options: SweepOptions = {}): { sweep: RadiusSweep; region: RegionTrack } {
   const now = options.now ?? Date.now;
   const started = now();
-  const prepared = prepareRows(parsed, params);
+  const prepared = prepareRows(parsed, params, options);
   const selected = selectionMask(selection, prepared.usedRows, parsed.rows);
   const jaccard: number[] = [];
   const nodes: Uint32Array[] = [];

@@ -64,7 +64,7 @@ export function seedStability(parsed: ParsedTable, params: CoverParams, options:
   if (!Number.isInteger(count) || count < 2) throw new Error(`invalid seed count: ${count}`);
   if (!Number.isInteger(pairSample) || pairSample < 1) throw new Error(`invalid pair sample: ${pairSample}`);
   if (!(params.radius > 0) || !Number.isFinite(params.radius)) throw new Error(`invalid radius: ${params.radius}`);
-  const prepared = prepareRows(parsed, { ...params, landmarks: "random" });
+  const prepared = prepareRows(parsed, { ...params, landmarks: "random" }, options, "the seed stability run");
   const selected = selection ? selectionMask(selection, prepared.usedRows, parsed.rows) : null;
   const seeds = Float64Array.from({ length: count }, (_, s) => params.seed + s);
   const builds: Balls[] = [];

@@ -4,6 +4,7 @@ import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
+import { checkStop, type RunControl } from "./runControl.ts";
 
 /** Every cover parameter but the radius: what a sweep holds fixed. */
 export type SweepParams = Omit<CoverParams, "radius">;
@@ -19,14 +20,16 @@ export interface PreparedRows extends PreparedFeatures {
  * The radius-free first half of buildCover, in the same order and by the same functions: select
  * the features under the missing-value policy, scale and weight, leave out rows where the metric
  * is undefined, and build the candidate index (search/rowIndex.ts) that buildCover builds per
- * call. Checks every parameter but the radius. O(n log n · d).
+ * call. Checks every parameter but the radius, and `control.shouldStop` while the index is
+ * built. O(n log n · d).
  */
-export function prepareRows(parsed: ParsedTable, params: SweepParams): PreparedRows {
+export function prepareRows(parsed: ParsedTable, params: SweepParams, control: RunControl = {}, what = "the sweep"): PreparedRows {
   const metric = maybeMetric(params.metric);
   maybeScale(params.scale);
   maybeLandmarkRule(params.landmarks);
   const missing = maybeMissingPolicy(params.missing ?? "drop");
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
   const prepared = prepareFeatures(parsed, params, metric, missing);
-  return { metric, ...prepared, index: createRowIndex(prepared.table, metric) };
+  checkStop(control, what);
+  return { metric, ...prepared, index: createRowIndex(prepared.table, metric, { onStep: () => checkStop(control, what) }) };
 }

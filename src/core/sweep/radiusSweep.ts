@@ -56,7 +56,7 @@ export interface RadiusSweep {
 export function radiusSweep(parsed: ParsedTable, params: SweepParams, options: SweepOptions = {}): RadiusSweep {
   const now = options.now ?? Date.now;
   const started = now();
-  const prepared = prepareRows(parsed, params);
+  const prepared = prepareRows(parsed, params, options);
   return sweepPrepared(prepared, parsed.rows, params, options, now() - started);
 }
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { Cancelled, isCancelled } from "../../../src/core/index.ts";
+import { buildCover, Cancelled, isCancelled } from "../../../src/core/index.ts";
+import { kdTree } from "../../../src/core/search/kdTree.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
 import { seedStability } from "../../../src/core/stability/seedStability.ts";
 import { pointsTable } from "./support.ts";
@@ -33,5 +34,27 @@ describe("progress and cancellation", () => {
 
   it("seed stability stops the same way", () => {
     expect(() => seedStability(grid, { ...params, radius: 2 }, { shouldStop: () => true })).toThrow("the seed stability run was cancelled");
+  });
+});
+
+describe("cancellation while the index is built", () => {
+  // 40,000 rows: the k-d tree has thousands of nodes, so its builder offers many chances to stop
+  const big = pointsTable(["x", "y"], Array.from({ length: 40_000 }, (_, i) => [i % 200, Math.floor(i / 200)]));
+  it("kdTree calls onStep every 256 nodes, and a throw from it stops buildCover, the sweep and seed stability in the tree build", () => {
+    let steps = 0;
+    kdTree(Float64Array.from({ length: 40_000 }, (_, i) => i), 1, 40_000, 32, { onStep: () => steps++ });
+    expect(steps).toBeGreaterThan(4); // ≥ 2·40,000/32 nodes; worked by hand: > 2,500 nodes / 256
+    let reports = 0;
+    // the build reports "landmarks" 0 once before the tree and then from inside it: stop at the second report
+    const build = (): unknown =>
+      buildCover(big, { ...params, radius: 3 }, { onProgress: (phase) => { if (phase === "landmarks" && ++reports === 2) throw new Cancelled("the build"); } });
+    expect(build).toThrow(Cancelled);
+    expect(reports).toBe(2);
+    let asked = 0;
+    expect(() => radiusSweep(big, params, { shouldStop: () => ++asked > 1 })).toThrow("the sweep was cancelled");
+    expect(asked).toBe(2); // once before the tree, once inside it
+    asked = 0;
+    expect(() => seedStability(big, { ...params, radius: 2 }, { shouldStop: () => ++asked > 1 })).toThrow("the seed stability run was cancelled");
+    expect(asked).toBe(2);
   });
 });
