@@ -2,7 +2,7 @@ import type { CompressedLists } from "../graph/ballMembership.ts";
 import type { KdTree } from "./kdTree.ts";
 import { boxBound } from "./boxBound.ts";
 import { scanLeaf } from "./leafScan.ts";
-import { appendList, createListBuilder, finishLists, type ListBuilder } from "./listBuilder.ts";
+import { closeLists, createListBuilder, finishLists, reserveLists, type ListBuilder } from "./listBuilder.ts";
 import { isInBall, judgeRadius, type RowIndex } from "./rowIndex.ts";
 import type { Norm } from "./searchSpace.ts";
 
@@ -134,13 +134,14 @@ function treeDepth(firstChild: Uint32Array): number {
   return deepest;
 }
 
-/** Appends the rows of (landmark, row) pairs as one ascending list per landmark 0..group−1 (counting sort, then sort within). */
+/** Appends the rows of (landmark, row) pairs as one ascending list per landmark 0..group−1 (counting sort, then sort within), written straight into the builder. */
 function appendGroup(builder: ListBuilder, pairs: Uint32Array, size: number, group: number): void {
   const starts = new Uint32Array(group + 1);
   for (let t = 0; t < size; t += 2) starts[pairs[t]! + 1]!++;
   for (let l = 0; l < group; ++l) starts[l + 1]! += starts[l]!;
-  const rows = new Uint32Array(size / 2);
+  const rows = reserveLists(builder, size / 2);
   const cursor = starts.slice(0, group);
   for (let t = 0; t < size; t += 2) rows[cursor[pairs[t]!]!++] = pairs[t + 1]!;
-  for (let l = 0; l < group; ++l) appendList(builder, rows.subarray(starts[l]!, starts[l + 1]!).sort());
+  for (let l = 0; l < group; ++l) rows.subarray(starts[l]!, starts[l + 1]!).sort();
+  closeLists(builder, starts.subarray(1));
 }

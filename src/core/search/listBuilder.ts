@@ -21,15 +21,29 @@ export function createListBuilder(capacity: number): ListBuilder {
 
 /** Appends one list. Amortised O(length). */
 export function appendList(builder: ListBuilder, list: Uint32Array): void {
-  if (builder.used + list.length > builder.current.length) {
+  reserveLists(builder, list.length).set(list);
+  closeLists(builder, [list.length]);
+}
+
+/**
+ * Room for lists of `total` values in all, written by the caller straight into the returned view
+ * and then closed by `closeLists` with their lengths: saves a staging copy of the lists.
+ */
+export function reserveLists(builder: ListBuilder, total: number): Uint32Array {
+  if (builder.used + total > builder.current.length) {
     builder.chunks.push(builder.current.subarray(0, builder.used));
-    builder.current = new Uint32Array(Math.max(builder.current.length, list.length));
+    builder.current = new Uint32Array(Math.max(builder.current.length, total));
     builder.used = 0;
   }
-  builder.current.set(list, builder.used);
-  builder.used += list.length;
-  builder.size += list.length;
-  builder.offsets.push(builder.size);
+  return builder.current.subarray(builder.used, builder.used + total);
+}
+
+/** Closes lists written into the last reserved room: `ends[l]` is the end of list l in it (ends ascending, the last one the total). */
+export function closeLists(builder: ListBuilder, ends: ArrayLike<number>): void {
+  const total = ends.length > 0 ? ends[ends.length - 1]! : 0;
+  for (let l = 0; l < ends.length; ++l) builder.offsets.push(builder.size + ends[l]!);
+  builder.used += total;
+  builder.size += total;
 }
 
 /** The lists' items so far, in order, as views of the chunks (no copy). */
