@@ -1,5 +1,4 @@
 import type { ParsedTable } from "../core/index.ts";
-import { createHandler } from "./handle.ts";
 import { lane, laneOf, type Answer, type Progress, type Request, type WorkerMessage } from "./protocol.ts";
 
 export type RequestBody = Request extends infer R ? (R extends Request ? Omit<R, "id"> : never) : never;
@@ -44,13 +43,19 @@ export function createWorkerClient(): WorkerClient {
   };
 
   if (typeof Worker === "undefined") {
-    const handle = createHandler({ progressInterval: 0 }); // in-thread reports cost nothing to deliver
+    // loaded only here, so the engine is bundled with the worker and not with the page
+    const handler = import("./handle.ts").then(({ createHandler }) => createHandler({ progressInterval: 0 })); // in-thread reports cost nothing to deliver
+    let queue: Promise<unknown> = handler;
     return {
       send(body, onProgress) {
         const request = { ...body, id: nextId++ } as Request;
         return new Promise<Answer>((resolve) => {
           pending.set(request.id, { request, resolve, onProgress });
-          queueMicrotask(() => void Promise.resolve(handle(request, deliver)).then(deliver));
+          // one request at a time, in order, as in the worker
+          queue = queue
+            .then(() => handler)
+            .then((handle) => handle(request, deliver))
+            .then(deliver, (error: unknown) => deliver({ id: request.id, type: "failed", message: String(error) }));
         });
       },
       cancel() {},
