@@ -45,6 +45,8 @@ export interface BuildOptions {
  * reference predicate provably rejects. Where it prunes well, each landmark's ball is found when
  * the landmark is placed (search/greedyBalls.ts, search/maximinBalls.ts) and the "members" phase
  * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time.
+ * Memory: the scaled rows are the build's one copy of the table; greedy and random nets index
+ * them in tree order in place (search/treeOrderIndex.ts), and the index is let go before edges.
  * Cost: O(n·L·d) at worst for n rows, L landmarks, d features, plus the loops step.
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
