@@ -165,7 +165,8 @@ try {
 const headers = Object.keys(rows[0] ?? {});
 const widths = headers.map((h) => Math.max(h.length, ...rows.map((r) => String(r[h]).length)));
 const line = (cells: string[]): string => `| ${cells.map((c, i) => c.padEnd(widths[i]!)).join(" | ")} |`;
-console.log("cover build in the browser worker (headless Chromium) vs Node; probes named in bench/browserBuild.ts");
+console.log("cover build in the browser worker (headless Chromium) vs Node, medians of 3 builds each side");
+console.log("probes: times = User Timing marks set by the app; long tasks = PerformanceObserver 'longtask'; worker peak = DevTools protocol Runtime.getHeapUsage (usedSize + backingStorageSize) in the worker every 50 ms, table included; main heap = DevTools protocol Performance.getMetrics JSHeapUsedSize");
 console.log(line(headers));
 console.log(line(widths.map((w) => "-".repeat(w))));
 for (const r of rows) console.log(line(headers.map((h) => String(r[h]))));
