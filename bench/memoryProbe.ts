@@ -16,8 +16,16 @@ const used = (): number => {
 
 export const memoryProbeName = "process.memoryUsage() heapUsed + arrayBuffers, sampled at progress reports";
 
+let warned = false;
+
 export function memoryProbe(): MemoryProbe {
-  (globalThis as { gc?: () => void }).gc?.();
+  const gc = (globalThis as { gc?: () => void }).gc;
+  // without a collection first, the baseline holds the last run's garbage and peaks read low
+  if (gc) gc();
+  else if (!warned) {
+    warned = true;
+    console.error("memory probe: no gc() (run under node --expose-gc, as npm run bench does); peaks may read low");
+  }
   const baseline = used();
   let highest = baseline;
   return {

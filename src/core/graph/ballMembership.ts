@@ -53,11 +53,12 @@ export function rowsToNodes(members: CompressedLists, rows: number): CompressedL
  * @example transposeLists([0, 2, 3], [Uint32Array.of(1, 0), Uint32Array.of(0)], 2).items // => Uint32Array [0, 1, 0]
  */
 export function transposeLists(offsets: ArrayLike<number>, pieces: readonly Uint32Array[], rows: number, rowOf?: Uint32Array): CompressedLists {
-  const row = (x: number): number => (rowOf ? rowOf[x]! : x);
   const counts = new Uint32Array(rows + 1);
   let total = 0;
   for (const piece of pieces) {
-    for (let t = 0; t < piece.length; ++t) counts[row(piece[t]!) + 1]!++;
+    // two loops rather than one with a lookup function: this runs once per membership
+    if (rowOf) for (let t = 0; t < piece.length; ++t) counts[rowOf[piece[t]!]! + 1]!++;
+    else for (let t = 0; t < piece.length; ++t) counts[piece[t]! + 1]!++;
     total += piece.length;
   }
   for (let i = 0; i < rows; ++i) counts[i + 1]! += counts[i]!;
@@ -66,9 +67,13 @@ export function transposeLists(offsets: ArrayLike<number>, pieces: readonly Uint
   let k = 0;
   let at = 0; // index of the item in the concatenation
   for (const piece of pieces) {
-    for (let t = 0; t < piece.length; ++t, ++at) {
+    for (let t = 0; t < piece.length; ) {
       while (at >= offsets[k + 1]!) ++k;
-      items[cursor[row(piece[t]!)]!++] = k;
+      // the rest of list k that lies in this piece
+      const stop = Math.min(piece.length, t + (offsets[k + 1]! - at));
+      at += stop - t;
+      if (rowOf) for (; t < stop; ++t) items[cursor[rowOf[piece[t]!]!]!++] = k;
+      else for (; t < stop; ++t) items[cursor[piece[t]!]!++] = k;
     }
   }
   return { offsets: counts, items };
