@@ -156,11 +156,8 @@ function landmarksAndBalls(
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;
     // visit the rows in file order (or the seed's order) at their tree positions
-    const positionOf = new Uint32Array(n);
-    for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
-    const order = rule === "random" ? shuffledOrder(n, randomSource(params.seed)).map((row) => positionOf[row]!) : positionOf;
     let lists = createListBuilder(n);
-    const net = greedyBalls(index, params.radius, order, { onProgress: netProgress, into: lists });
+    const net = greedyBalls(index, params.radius, visitOrder(rowAt, rule, params.seed), { onProgress: netProgress, into: lists });
     const landmarkTime = lap();
     onProgress?.("members", 0);
     if (lists.offsets.length - 1 === net.landmarks.length) {
@@ -181,6 +178,17 @@ function landmarksAndBalls(
   const lists = net.members ?? ballMembership(index.table, metric, params.radius, centers, membersProgress, { index });
   if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
   return { centers, balls: { kind: "rows", lists }, prepared, scaleTime, landmarkTime };
+}
+
+/** Tree positions of the rows in file order, or in the order shuffled by the seed (a new array the net alone holds). */
+function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint32Array {
+  const n = rowAt.length;
+  const positionOf = new Uint32Array(n);
+  for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
+  if (rule !== "random") return positionOf;
+  const order = shuffledOrder(n, randomSource(seed));
+  for (let k = 0; k < n; ++k) order[k] = positionOf[order[k]!]!;
+  return order;
 }
 
 /** For each row, the nodes whose balls hold it, ascending. */

@@ -15,8 +15,9 @@ export interface ListBuilder {
   size: number;
 }
 
+/** A builder whose chunks hold `capacity` values, between 2¹⁶ and 2¹⁸ (a room wider than that gets a chunk of its own size). */
 export function createListBuilder(capacity: number): ListBuilder {
-  return { offsets: [0], chunks: [], current: new Uint32Array(Math.max(1 << 16, capacity)), used: 0, size: 0 };
+  return { offsets: [0], chunks: [], current: new Uint32Array(Math.min(1 << 18, Math.max(1 << 16, capacity))), used: 0, size: 0 };
 }
 
 /** Appends one list. Amortised O(length). */
