@@ -89,6 +89,7 @@ try {
     const answered: number[] = [];
     const drawn: number[] = [];
     let nodes = 0;
+    let edges = 0;
     for (let k = 0; k < 3; ++k) {
       await page.evaluate(() => performance.clearMarks());
       await page.locator("#radius-number").fill(String(radius * (1 + k * 1e-12)));
@@ -101,8 +102,10 @@ try {
       answered.push(times.answered);
       drawn.push(times.drawn);
       const count = Number((await page.getByTestId("node-count").textContent())!.replaceAll(",", ""));
-      if (k > 0 && count !== nodes) throw new Error(`radius ${radius}: ${nodes} then ${count} nodes`);
+      const edgeCount = Number((await page.getByTestId("edge-count").textContent())!.replaceAll(",", ""));
+      if (k > 0 && (count !== nodes || edgeCount !== edges)) throw new Error(`radius ${radius}: ${nodes} nodes, ${edges} edges, then ${count}, ${edgeCount}`);
       nodes = count;
+      edges = edgeCount;
     }
     await page.waitForTimeout(1000);
     const answeredMs = median(answered);
@@ -144,13 +147,13 @@ try {
       radius: Number(radius.toPrecision(4)),
       "landmarks (Node)": landmarks,
       "nodes (browser)": nodes,
-      "same nodes": nodes === nodeResult.landmarks.length ? "yes" : "NO",
+      "same nodes and edges": nodes === nodeResult.landmarks.length && edges === nodeResult.edges.source.length ? "yes" : "NO",
       "load s": (loadMs / 1000).toFixed(1),
       "longest main task in load ms": longestInLoad.toFixed(0),
       "Node build ms": nodeMs.toFixed(0),
       "browser request→answer ms": answeredMs.toFixed(0),
       "browser request→drawn ms": drawnMs.toFixed(0),
-      "ratio": (drawnMs / nodeMs).toFixed(2),
+      "ratio drawn ÷ Node": (drawnMs / nodeMs).toFixed(2),
       "longest main task in builds ms": longest.toFixed(0),
       "cancel→answer ms": cancelMs.toFixed(0),
       "table survives cancel": survived ? "yes" : "NO",

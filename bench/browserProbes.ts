@@ -67,16 +67,26 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
   await cdp.send("Target.setAutoAttach", { autoAttach: true, waitForDebuggerOnStart: false, flatten: false });
   let peak = 0;
   let busy = false;
+  let warned = false;
   const timer = setInterval(() => {
     if (!session || busy) return;
     busy = true;
     const id = nextId++;
     new Promise<HeapUsage | undefined>((resolve) => {
       waiting.set(id, resolve);
+      // a reply that never comes (the worker was replaced) must not stop the sampling
+      setTimeout(() => {
+        if (waiting.delete(id)) resolve(undefined);
+      }, 2000);
       cdp.send("Target.sendMessageToTarget", { sessionId: session!, message: JSON.stringify({ id, method: "Runtime.getHeapUsage" }) }).catch(() => resolve(undefined));
     })
       .then((usage) => {
-        if (usage) peak = Math.max(peak, usage.usedSize + (usage.backingStorageSize ?? 0));
+        if (!usage) return;
+        if (usage.backingStorageSize === undefined && !warned) {
+          warned = true;
+          console.error("worker memory probe: this browser reports no backingStorageSize; array buffers are not counted");
+        }
+        peak = Math.max(peak, usage.usedSize + (usage.backingStorageSize ?? 0));
       })
       .finally(() => (busy = false));
   }, 50);

@@ -89,6 +89,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     }
     const started = env.now();
     mark("shoal:build-requested");
+    // a newer compute request cancels the running one: a sweep or seed run here ends without an answer
+    if (store.getState().stability.state === "running") set({ stability: idleStability });
     set({ build: { state: "running", phase: null, fraction: 0, error: null, elapsedMs: null } });
     const answer = await env.client.send({ type: "build", params }, (progress) => {
       if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds") return;
@@ -102,6 +104,12 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       set({ build: { state: "failed", phase: null, fraction: 0, error: answer.type === "failed" ? answer.message : "unexpected answer", elapsedMs: null } });
     }
   }
+
+  /** A sweep or seed run cancels a running build (a newer compute request wins): it will get no answer. */
+  const endRunningBuild = (): void => {
+    const { build } = store.getState();
+    if (build.state === "running") set({ build: { state: "idle", phase: null, fraction: 0, error: null, elapsedMs: null } });
+  };
 
   const setAndRebuild = (patch: Partial<ParamsSlice>): Promise<void> => {
     set(patch);
@@ -194,6 +202,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       if (!params) return;
       const { radius: _radius, ...sweepParams } = params;
       const ticket = ++latestBuild;
+      endRunningBuild();
       set({ stability: { state: "running", task: "sweep", fraction: 0, error: null } });
       const range = { steps: s.sweepSteps, ...(s.sweepMin === null ? {} : { radiusMin: s.sweepMin }), ...(s.sweepMax === null ? {} : { radiusMax: s.sweepMax }) };
       const answer = await env.client.send({ type: "sweep", params: sweepParams, range, selection: selectRegionRows(s) }, (progress) => {
@@ -209,6 +218,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const params = selectCoverParams(s);
       if (!params) return;
       const ticket = ++latestBuild;
+      endRunningBuild();
       set({ stability: { state: "running", task: "seeds", fraction: 0, error: null } });
       const answer = await env.client.send({ type: "seeds", params, seeds: s.seedCount, selection: selectRegionRows(s) }, (progress) => {
         if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
@@ -220,7 +230,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     cancelStability(): void {
       latestBuild++;
       env.client.cancel("compute");
-      set({ stability: { state: "idle", task: null, fraction: 0, error: null } });
+      set({ stability: idleStability });
     },
     /** The export zip of the current result, or null when nothing is built. */
     exportCover(): { fileName: string; bytes: Uint8Array } | null {
@@ -237,6 +247,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     },
   };
 }
+
+const idleStability = { state: "idle", task: null, fraction: 0, error: null } as const;
 
 /** A User Timing mark (seen by the benchmark's browser probe); a no-op where there is no performance API. */
 function mark(name: string): void {

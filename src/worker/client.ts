@@ -52,10 +52,15 @@ export function createWorkerClient(): WorkerClient {
         return new Promise<Answer>((resolve) => {
           pending.set(request.id, { request, resolve, onProgress });
           // one request at a time, in order, as in the worker
-          queue = queue
-            .then(() => handler)
-            .then((handle) => handle(request, deliver))
-            .then(deliver, (error: unknown) => deliver({ id: request.id, type: "failed", message: String(error) }));
+          queue = queue.then(async () => {
+            let answer: Answer;
+            try {
+              answer = await (await handler)(request, deliver);
+            } catch (error) {
+              answer = { id: request.id, type: "failed", message: String(error) };
+            }
+            deliver(answer);
+          }).catch(() => undefined); // a failure to deliver must not stop later requests
         });
       },
       cancel() {},

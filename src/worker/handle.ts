@@ -78,7 +78,7 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
         case "suggestRadius":
           return { id: request.id, type: "radius", radius: suggestRadius(loaded(), request.params) };
         case "build":
-          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress: progress, now }) };
+          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress: progress, shouldStop: () => isStopped(request), now }) };
         case "sweep": {
           const { radiusMin, radiusMax, steps } = request.range;
           const options = {

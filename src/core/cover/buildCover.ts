@@ -4,6 +4,7 @@ import { createListBuilder, listPieces } from "../search/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../graph/components.ts";
 import { overlapEdges } from "../graph/overlapEdges.ts";
+import { Cancelled } from "../cancel.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
@@ -29,7 +30,10 @@ export interface CoverResult extends Omit<PreparedFeatures, "table">, CoverGraph
 }
 
 export interface BuildOptions {
+  /** Progress by phase; a throw from it (core's Cancelled) stops the build. */
   onProgress?: (phase: BuildPhase, fraction: number) => void;
+  /** Asked inside long steps that report no progress (selecting, scaling, the tree); true stops the build with Cancelled. */
+  shouldStop?: () => boolean;
   now?: () => number;
   /** Compute triangles and b1 (default true). */
   loops?: boolean;
@@ -66,7 +70,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     return elapsed;
   };
   onProgress?.("scale", 0);
-  const found = landmarksAndBalls(parsed, params, metric, missing, rule, lap, onProgress);
+  const found = landmarksAndBalls(parsed, params, metric, missing, rule, lap, options);
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -141,9 +145,12 @@ function landmarksAndBalls(
   missing: MissingPolicy,
   rule: LandmarkRule,
   lap: () => number,
-  onProgress: BuildOptions["onProgress"],
+  { onProgress, shouldStop }: BuildOptions,
 ): FoundNet {
-  const { table, ...rest } = prepareFeatures(parsed, params, metric, missing);
+  const step = (): void => {
+    if (shouldStop?.()) throw new Cancelled("the build");
+  };
+  const { table, ...rest } = prepareFeatures(parsed, params, metric, missing, step);
   const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
   const n = table.rows;
@@ -151,7 +158,7 @@ function landmarksAndBalls(
   const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
 
   onProgress?.("landmarks", 0);
-  const indexOptions = { onStep: () => onProgress?.("landmarks", 0) }; // a chance to cancel while the tree is built
+  const indexOptions = { onStep: step }; // a chance to cancel while the tree is built
   const ordered = rule === "maximin" ? null : treeOrderIndex(table, metric, indexOptions); // `table` is rearranged from here on
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;

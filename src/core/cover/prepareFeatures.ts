@@ -23,18 +23,25 @@ export interface PreparedFeatures {
  * indicator column per level of each `oneHot` column, worth its weight (default 1) and never
  * scaled (z-scoring indicators would stretch rare levels); a missing level drops the row under
  * "drop" and gives all-zero indicators (counted as filled) otherwise; finally leave out rows on
- * which the metric is undefined. O(n · (d + levels)) plus the scaling.
+ * which the metric is undefined. `onStep` is called now and then (a chance to cancel by
+ * throwing). O(n · (d + levels)) plus the scaling.
  */
-export function prepareFeatures(parsed: ParsedTable, params: Pick<CoverParams, "features" | "scale" | "weights" | "oneHot">, metric: Metric, missing: MissingPolicy): PreparedFeatures {
+export function prepareFeatures(
+  parsed: ParsedTable,
+  params: Pick<CoverParams, "features" | "scale" | "weights" | "oneHot">,
+  metric: Metric,
+  missing: MissingPolicy,
+  onStep?: () => void,
+): PreparedFeatures {
   const encoded = (params.oneHot ?? []).map((name) => categoricalColumn(parsed, name));
   if (params.features.length === 0 && encoded.length === 0) throw new Error("choose at least one feature column");
   const numericWeights = Object.fromEntries(Object.entries(params.weights ?? {}).filter(([name]) => params.features.includes(name)));
-  const selection = params.features.length > 0 ? selectFeatures(parsed, params.features, missing) : allRows(parsed);
+  const selection = params.features.length > 0 ? selectFeatures(parsed, params.features, missing, onStep) : allRows(parsed);
   let usedRows = selection.usedRows;
   let droppedRows = selection.droppedRows;
   const imputed: Record<string, number> = { ...selection.imputed };
   // selectFeatures made this table for us alone: scale it in place rather than beside a copy
-  const scaled = params.features.length > 0 ? scaleTable(selection.table, params.scale, numericWeights, true) : { table: selection.table, constantColumns: [] };
+  const scaled = params.features.length > 0 ? scaleTable(selection.table, params.scale, numericWeights, { overwrite: true, ...(onStep ? { onStep } : {}) }) : { table: selection.table, constantColumns: [] };
   let table = scaled.table;
   if (encoded.length > 0) {
     const keep = new Uint8Array(usedRows.length).fill(1);
@@ -47,6 +54,7 @@ export function prepareFeatures(parsed: ParsedTable, params: Pick<CoverParams, "
     usedRows = kept.usedRows;
     table = encoded.reduce((left, column) => joinColumns(left, oneHot(column.categories!, { name: column.name, weight: params.weights?.[column.name] ?? 1, rows: usedRows })), kept.table);
   }
+  onStep?.();
   const defined = excludeUndefinedRows(table, metric, usedRows);
   return { table: defined.table, usedRows: defined.usedRows, droppedRows, undefinedRows: defined.undefinedRows, imputed, constantColumns: scaled.constantColumns };
 }

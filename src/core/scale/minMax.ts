@@ -8,7 +8,7 @@ import type { ScaledTable } from "./zScore.ts";
  * A constant column (max = min) becomes 0 and is reported. O(n·d).
  * @example minMax({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(2, 4, 6) }).table.values // => Float64Array [0, 0.5, 1]
  */
-export function minMax(input: NumericTable, into?: Float64Array): ScaledTable {
+export function minMax(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
   return columnTransform(input, into, (column) => {
     let lo = Infinity;
     let hi = -Infinity;
@@ -17,5 +17,5 @@ export function minMax(input: NumericTable, into?: Float64Array): ScaledTable {
       hi = Math.max(hi, x);
     }
     return { center: lo, spread: hi - lo };
-  });
+  }, onStep);
 }

@@ -9,9 +9,9 @@ import type { ScaledTable } from "./zScore.ts";
  * A column with zero IQR becomes 0 and is reported (even if its extremes differ). O(n log n · d).
  * @example robust({ rows: 5, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3, 4, 100) }).table.values // => Float64Array [-1, -0.5, 0, 0.5, 48.5]
  */
-export function robust(input: NumericTable, into?: Float64Array): ScaledTable {
+export function robust(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
   return columnTransform(input, into, (column) => {
     const sorted = Float64Array.from(column).sort();
     return { center: quantileSorted(sorted, 0.5), spread: quantileSorted(sorted, 0.75) - quantileSorted(sorted, 0.25) };
-  });
+  }, onStep);
 }

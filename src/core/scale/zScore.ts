@@ -15,7 +15,7 @@ export interface ScaledTable {
  * table (s is undefined there). O(n·d); returns a new table.
  * @example zScore({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3) }).table.values // => Float64Array [-1, 0, 1]
  */
-export function zScore(input: NumericTable, into?: Float64Array): ScaledTable {
+export function zScore(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
   return columnTransform(input, into, (column) => {
     let mean = 0;
     let m2 = 0;
@@ -25,5 +25,5 @@ export function zScore(input: NumericTable, into?: Float64Array): ScaledTable {
       m2 += delta * (column[i]! - mean);
     }
     return { center: mean, spread: column.length > 1 ? Math.sqrt(m2 / (column.length - 1)) : 0 };
-  });
+  }, onStep);
 }

@@ -24,7 +24,7 @@ export interface KdTree {
 export interface KdTreeOptions {
   /** Rearrange the caller's `points` into tree order (they become `coords`) instead of copying them. */
   readonly inPlace?: boolean;
-  /** Called after every 256 nodes, e.g. to check for cancellation by throwing. */
+  /** Called before splitting a node once 2¹⁶ rows were split since the last call, e.g. to check for cancellation by throwing. */
   readonly onStep?: () => void;
 }
 
@@ -60,12 +60,17 @@ export function kdTree(points: Float64Array, dims: number, rows: number, leafSiz
   const high = new Float64Array(dims);
   end[0] = rows;
   let nodes = 1;
+  let handled = 0;
   // nodes are appended in breadth-first order, so every child comes after its parent
   for (let node = 0; node < nodes; ++node) {
     const from = start[node]!;
     const to = end[node]!;
-    if ((node & 255) === 255) onStep?.();
     if (to - from <= leafSize) continue;
+    // splitting costs about the node's rows: a step after every 2¹⁶ rows split, wherever in the tree
+    if (onStep && (handled += to - from) >= 1 << 16) {
+      handled = 0;
+      onStep();
+    }
     const sampled = widest(coords, dims, from, to, Math.max(1, Math.floor((to - from) / sampleSize)), low, high);
     const k = sampled >= 0 ? sampled : widest(coords, dims, from, to, 1, low, high);
     if (k < 0) continue;

@@ -10,6 +10,8 @@ export interface ListBuilder {
   /** Full chunks, each trimmed to what was written. */
   readonly chunks: Uint32Array[];
   current: Uint32Array;
+  /** Values per chunk; a room wider than that gets a chunk of its own size. */
+  readonly chunkSize: number;
   /** Values written into `current`, and in all lists so far. */
   used: number;
   size: number;
@@ -17,7 +19,8 @@ export interface ListBuilder {
 
 /** A builder whose chunks hold `capacity` values, between 2¹⁶ and 2¹⁸ (a room wider than that gets a chunk of its own size). */
 export function createListBuilder(capacity: number): ListBuilder {
-  return { offsets: [0], chunks: [], current: new Uint32Array(Math.min(1 << 18, Math.max(1 << 16, capacity))), used: 0, size: 0 };
+  const chunkSize = Math.min(1 << 18, Math.max(1 << 16, capacity));
+  return { offsets: [0], chunks: [], current: new Uint32Array(chunkSize), chunkSize, used: 0, size: 0 };
 }
 
 /** Appends one list. Amortised O(length). */
@@ -33,7 +36,7 @@ export function appendList(builder: ListBuilder, list: Uint32Array): void {
 export function reserveLists(builder: ListBuilder, total: number): Uint32Array {
   if (builder.used + total > builder.current.length) {
     builder.chunks.push(builder.current.subarray(0, builder.used));
-    builder.current = new Uint32Array(Math.max(builder.current.length, total));
+    builder.current = new Uint32Array(Math.max(builder.chunkSize, total));
     builder.used = 0;
   }
   return builder.current.subarray(builder.used, builder.used + total);

@@ -27,23 +27,25 @@ export function treeOrderIndex(table: NumericTable, metric: Metric, options: Row
   if (!space) return { index: createRowIndex(table, metric, options), rowAt: null };
   const { rows: n, columns: d } = table;
   const tree = kdTree(space.points, space.dims, n, options.leafSize ?? defaultLeafSize, { inPlace: true, ...(options.onStep ? { onStep: options.onStep } : {}) });
-  if (space.points !== table.values) permuteRows(table.values, d, tree.rowAt);
+  if (space.points !== table.values) permuteRows(table.values, d, tree.rowAt, options.onStep);
   const identity = Uint32Array.from({ length: n }, (_, i) => i);
   const renumbered: NumericTable = { ...table, values: table.values };
   const index = rowIndexOf(renumbered, metric, { ...space, points: tree.coords }, { ...tree, rowAt: identity, positionOf: identity });
   return { index, rowAt: tree.rowAt };
 }
 
-/** Rearranges row-major rows in place so that row p holds what row rowAt[p] held, by following the permutation's cycles. O(n·d). */
-export function permuteRows(values: Float64Array, d: number, rowAt: Uint32Array): void {
+/** Rearranges row-major rows in place so that row p holds what row rowAt[p] held, by following the permutation's cycles; `onStep` every 2¹⁶ rows. O(n·d). */
+export function permuteRows(values: Float64Array, d: number, rowAt: Uint32Array, onStep?: () => void): void {
   const n = rowAt.length;
   const done = new Uint8Array(n);
   const held = new Float64Array(d);
+  let moved = 0;
   for (let start = 0; start < n; ++start) {
     if (done[start]) continue;
     for (let k = 0; k < d; ++k) held[k] = values[start * d + k]!;
     let p = start;
     for (;;) {
+      if ((++moved & 0xffff) === 0) onStep?.();
       done[p] = 1;
       const from = rowAt[p]!;
       if (from === start) {

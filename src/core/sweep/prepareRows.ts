@@ -29,7 +29,7 @@ export function prepareRows(parsed: ParsedTable, params: SweepParams, control: R
   maybeLandmarkRule(params.landmarks);
   const missing = maybeMissingPolicy(params.missing ?? "drop");
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
-  const prepared = prepareFeatures(parsed, params, metric, missing);
+  const prepared = prepareFeatures(parsed, params, metric, missing, () => checkStop(control, what));
   checkStop(control, what);
   return { metric, ...prepared, index: createRowIndex(prepared.table, metric, { onStep: () => checkStop(control, what) }) };
 }

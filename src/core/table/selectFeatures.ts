@@ -46,9 +46,10 @@ export interface FeatureSelection {
  * Copies the chosen numeric columns into a row-major matrix. Missing values are handled by
  * `policy`: "drop" leaves out every row with a missing feature (returned, never lost);
  * "median" (Hyndman–Fan type 7) or "mean" fills each column's gaps from its present values.
- * A column with no value at all (type "empty") cannot be a feature. O(rows · features).
+ * A column with no value at all (type "empty") cannot be a feature. `onStep` is called every
+ * 65,536 rows (a chance to cancel by throwing). O(rows · features).
  */
-export function selectFeatures(parsed: ParsedTable, features: readonly string[], policy: MissingPolicy = "drop"): FeatureSelection {
+export function selectFeatures(parsed: ParsedTable, features: readonly string[], policy: MissingPolicy = "drop", onStep?: () => void): FeatureSelection {
   if (features.length === 0) throw new Error("choose at least one feature column");
   const columns = features.map((name) => featureColumn(parsed, name));
   const d = columns.length;
@@ -66,6 +67,7 @@ export function selectFeatures(parsed: ParsedTable, features: readonly string[],
   const droppedRows = new Uint32Array(n - used);
   const values = new Float64Array(used * d);
   for (let i = 0, u = 0, x = 0; i < n; ++i) {
+    if ((i & 0xffff) === 0xffff) onStep?.();
     if (!complete[i]) {
       droppedRows[x++] = i;
       continue;

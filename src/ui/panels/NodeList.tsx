@@ -14,6 +14,8 @@ export function NodeList() {
   // a thousand options are rendered in the background (interruptible), not in the task that brought the result
   const shown = useMemo(() => ({ result: latest, colors: latestColors, colorBy: latestColorBy }), [latest, latestColors, latestColorBy]);
   const { result, colors, colorBy } = useDeferredValue(shown);
+  // while the list still shows an older result, a choice in it would open a node of the new one
+  const stale = result !== latest;
   if (!result) return null;
   const { offsets } = result.members;
   if (result.landmarks.length > maxDrawnNodes) {
@@ -25,6 +27,7 @@ export function NodeList() {
           min={1}
           max={result.landmarks.length}
           aria-label="node number"
+          disabled={stale}
           value={selected === null ? "" : selected + 1}
           onChange={(e) => {
             const k = Number(e.currentTarget.value) - 1;
@@ -40,7 +43,9 @@ export function NodeList() {
       <select
         size={8}
         aria-label="nodes"
-        value={selected === null ? "" : String(selected)}
+        disabled={stale}
+        aria-busy={stale}
+        value={selected === null || stale ? "" : String(selected)}
         onChange={(e) => actions().selectNode(Number(e.currentTarget.value))}
       >
         <option value="" disabled>no node open</option>

@@ -119,7 +119,7 @@ describe("scaleTable in place (overwrite)", () => {
         const weights = { c0: weight };
         const copied = scaleTable(table(rows, columns, names, values), scale, weights);
         const input = table(rows, columns, names, values);
-        const inPlace = scaleTable(input, scale, weights, true);
+        const inPlace = scaleTable(input, scale, weights, { overwrite: true });
         expect(inPlace.table.values).toBe(input.values);
         expect(Array.from(inPlace.table.values)).toEqual(Array.from(copied.table.values));
         expect(inPlace.constantColumns).toEqual(copied.constantColumns);

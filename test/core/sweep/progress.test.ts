@@ -40,16 +40,22 @@ describe("progress and cancellation", () => {
 describe("cancellation while the index is built", () => {
   // 40,000 rows: the k-d tree has thousands of nodes, so its builder offers many chances to stop
   const big = pointsTable(["x", "y"], Array.from({ length: 40_000 }, (_, i) => [i % 200, Math.floor(i / 200)]));
-  it("kdTree calls onStep every 256 nodes, and a throw from it stops buildCover, the sweep and seed stability in the tree build", () => {
+  it("kdTree calls onStep once per 2^16 rows split, and a throw from it stops buildCover, the sweep and seed stability in the tree build", () => {
     let steps = 0;
     kdTree(Float64Array.from({ length: 40_000 }, (_, i) => i), 1, 40_000, 32, { onStep: () => steps++ });
-    expect(steps).toBeGreaterThan(4); // ≥ 2·40,000/32 nodes; worked by hand: > 2,500 nodes / 256
-    let reports = 0;
-    // the build reports "landmarks" 0 once before the tree and then from inside it: stop at the second report
-    const build = (): unknown =>
-      buildCover(big, { ...params, radius: 3 }, { onProgress: (phase) => { if (phase === "landmarks" && ++reports === 2) throw new Cancelled("the build"); } });
-    expect(build).toThrow(Cancelled);
-    expect(reports).toBe(2);
+    // worked by hand: 40,000 rows are split on each of the 11 levels above the leaves (40,000 / 2^10 ≈ 39 > 32), 440,000 rows in all
+    expect(steps).toBe(Math.floor((40_000 * 11) / 65_536));
+    // scale "none": the build asks once before the tree (after preparing the rows) and then inside it
+    let asks = 0;
+    let phase = "";
+    const build = (): unknown => buildCover(big, { ...params, radius: 3 }, { onProgress: (p) => (phase = p), shouldStop: () => ++asks > 1 });
+    expect(build).toThrow("the build was cancelled");
+    expect([asks, phase]).toEqual([2, "landmarks"]);
+    // z-scoring asks between its two columns, before the tree
+    asks = 0;
+    const scaled = (): unknown => buildCover(big, { ...params, scale: "zscore", radius: 3 }, { onProgress: (p) => (phase = p), shouldStop: () => ++asks > 1 });
+    expect(scaled).toThrow("the build was cancelled");
+    expect([asks, phase]).toEqual([2, "scale"]);
     let asked = 0;
     expect(() => radiusSweep(big, params, { shouldStop: () => ++asked > 1 })).toThrow("the sweep was cancelled");
     expect(asked).toBe(2); // once before the tree, once inside it
