@@ -91,6 +91,7 @@ try {
     let nodes = 0;
     let edges = 0;
     for (let k = 0; k < 3; ++k) {
+      await workerMemory.collect(); // each build starts from a collected heap, as in the Node bench
       await page.evaluate(() => performance.clearMarks());
       await page.locator("#radius-number").fill(String(radius * (1 + k * 1e-12)));
       await page.locator("#radius-number").press("Enter");
@@ -169,7 +170,7 @@ const headers = Object.keys(rows[0] ?? {});
 const widths = headers.map((h) => Math.max(h.length, ...rows.map((r) => String(r[h]).length)));
 const line = (cells: string[]): string => `| ${cells.map((c, i) => c.padEnd(widths[i]!)).join(" | ")} |`;
 console.log("cover build in the browser worker (headless Chromium) vs Node, medians of 3 builds each side");
-console.log("probes: times = User Timing marks set by the app; long tasks = PerformanceObserver 'longtask'; worker peak = DevTools protocol Runtime.getHeapUsage (usedSize + backingStorageSize) in the worker every 50 ms, table included; main heap = DevTools protocol Performance.getMetrics JSHeapUsedSize");
+console.log("probes: times = User Timing marks set by the app; long tasks = PerformanceObserver 'longtask'; worker peak = DevTools protocol Runtime.getHeapUsage (usedSize + backingStorageSize) in the worker every 50 ms, from a collected heap (HeapProfiler.collectGarbage) before each build, table included; main heap = DevTools protocol Performance.getMetrics JSHeapUsedSize");
 console.log(line(headers));
 console.log(line(widths.map((w) => "-".repeat(w))));
 for (const r of rows) console.log(line(headers.map((h) => String(r[h]))));

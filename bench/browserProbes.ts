@@ -48,39 +48,46 @@ export function pageMemory(page: Page): Promise<number> {
  * worker's own steps, so a long build is sampled while it runs). A sample is usedSize (JS heap)
  * + backingStorageSize (ArrayBuffer and SharedArrayBuffer contents), the browser's counterpart
  * of Node's heapUsed + arrayBuffers; uncollected garbage counts, as it does in Node.
+ * `collect()` asks the worker for a full collection (HeapProfiler.collectGarbage), as the Node
+ * bench runs gc() before each build, so a peak is not inflated by an earlier step's garbage.
  * Call before page.goto. `reset()` starts a new peak; `peak()` is the largest sample since.
  */
-export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => void; peak: () => number; stop: () => void }> {
+export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => void; peak: () => number; collect: () => Promise<void>; stop: () => void }> {
   const cdp = await page.context().newCDPSession(page);
   let session: string | null = null;
   let nextId = 1;
-  const waiting = new Map<number, (usage: HeapUsage | undefined) => void>();
+  const waiting = new Map<number, (result: unknown) => void>();
   cdp.on("Target.attachedToTarget", (event) => {
     if (event.targetInfo.type === "worker") session = event.sessionId;
   });
   cdp.on("Target.receivedMessageFromTarget", (event) => {
-    const message = JSON.parse(event.message) as { id?: number; result?: HeapUsage };
+    const message = JSON.parse(event.message) as { id?: number; result?: unknown };
     if (message.id === undefined) return;
     waiting.get(message.id)?.(message.result);
     waiting.delete(message.id);
   });
   await cdp.send("Target.setAutoAttach", { autoAttach: true, waitForDebuggerOnStart: false, flatten: false });
+  /** One protocol call in the worker; undefined when there is no worker or no reply within `timeoutMs` (the worker was replaced). */
+  const call = (method: string, timeoutMs: number): Promise<unknown> => {
+    if (!session) return Promise.resolve(undefined);
+    const id = nextId++;
+    return new Promise((resolve) => {
+      waiting.set(id, resolve);
+      setTimeout(() => {
+        if (waiting.delete(id)) resolve(undefined);
+      }, timeoutMs);
+      cdp.send("Target.sendMessageToTarget", { sessionId: session!, message: JSON.stringify({ id, method }) }).catch(() => resolve(undefined));
+    });
+  };
   let peak = 0;
   let busy = false;
   let warned = false;
   const timer = setInterval(() => {
-    if (!session || busy) return;
+    if (busy) return;
     busy = true;
-    const id = nextId++;
-    new Promise<HeapUsage | undefined>((resolve) => {
-      waiting.set(id, resolve);
-      // a reply that never comes (the worker was replaced) must not stop the sampling
-      setTimeout(() => {
-        if (waiting.delete(id)) resolve(undefined);
-      }, 2000);
-      cdp.send("Target.sendMessageToTarget", { sessionId: session!, message: JSON.stringify({ id, method: "Runtime.getHeapUsage" }) }).catch(() => resolve(undefined));
-    })
-      .then((usage) => {
+    void call("Runtime.getHeapUsage", 2000)
+      .then((result) => {
+        const usage = result as HeapUsage | undefined;
         if (!usage) return;
         if (usage.backingStorageSize === undefined && !warned) {
           warned = true;
@@ -90,7 +97,12 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
       })
       .finally(() => (busy = false));
   }, 50);
-  return { reset: () => (peak = 0), peak: () => peak, stop: () => clearInterval(timer) };
+  return {
+    reset: () => (peak = 0),
+    peak: () => peak,
+    collect: async () => void (await call("HeapProfiler.collectGarbage", 30_000)),
+    stop: () => clearInterval(timer),
+  };
 }
 
 interface HeapUsage {
