@@ -9,10 +9,11 @@ import type { ScaledTable } from "./zScore.ts";
  * @example minMax({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(2, 4, 6) }).table.values // => Float64Array [0, 0.5, 1]
  */
 export function minMax(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
-  return columnTransform(input, into, (column) => {
+  return columnTransform(input, into, (values, j, d, n) => {
     let lo = Infinity;
     let hi = -Infinity;
-    for (const x of column) {
+    for (let i = 0; i < n; ++i) {
+      const x = values[i * d + j]!;
       lo = Math.min(lo, x);
       hi = Math.max(hi, x);
     }

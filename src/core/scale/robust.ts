@@ -10,8 +10,8 @@ import type { ScaledTable } from "./zScore.ts";
  * @example robust({ rows: 5, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3, 4, 100) }).table.values // => Float64Array [-1, -0.5, 0, 0.5, 48.5]
  */
 export function robust(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
-  return columnTransform(input, into, (column) => {
-    const sorted = Float64Array.from(column).sort();
+  return columnTransform(input, into, (values, j, d, n) => {
+    const sorted = Float64Array.from({ length: n }, (_, i) => values[i * d + j]!).sort();
     return { center: quantileSorted(sorted, 0.5), spread: quantileSorted(sorted, 0.75) - quantileSorted(sorted, 0.25) };
   }, onStep);
 }

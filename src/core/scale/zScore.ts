@@ -16,14 +16,15 @@ export interface ScaledTable {
  * @example zScore({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3) }).table.values // => Float64Array [-1, 0, 1]
  */
 export function zScore(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
-  return columnTransform(input, into, (column) => {
+  return columnTransform(input, into, (values, j, d, n) => {
     let mean = 0;
     let m2 = 0;
-    for (let i = 0; i < column.length; ++i) {
-      const delta = column[i]! - mean;
+    for (let i = 0; i < n; ++i) {
+      const x = values[i * d + j]!;
+      const delta = x - mean;
       mean += delta / (i + 1);
-      m2 += delta * (column[i]! - mean);
+      m2 += delta * (x - mean);
     }
-    return { center: mean, spread: column.length > 1 ? Math.sqrt(m2 / (column.length - 1)) : 0 };
+    return { center: mean, spread: n > 1 ? Math.sqrt(m2 / (n - 1)) : 0 };
   }, onStep);
 }
