@@ -1,6 +1,6 @@
-import { ballMembership, rowsToNodes, transposeLists, type CompressedLists } from "../graph/ballMembership.ts";
+import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
 import { blockMembershipInto } from "../search/blockMembership.ts";
-import { createListBuilder, listPieces } from "../search/listBuilder.ts";
+import { createListBuilder, transposeBuilt, type ListBuilder } from "../search/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../graph/components.ts";
 import { overlapEdges } from "../graph/overlapEdges.ts";
@@ -50,7 +50,9 @@ export interface BuildOptions {
  * the landmark is placed (search/greedyBalls.ts, search/maximinBalls.ts) and the "members" phase
  * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time.
  * Memory: the scaled rows are the build's one copy of the table; greedy and random nets index
- * them in tree order in place (search/treeOrderIndex.ts), and the index is let go before edges.
+ * them in tree order in place (search/treeOrderIndex.ts), keep the balls packed as varint gaps
+ * (search/packedLists.ts), and reuse the rows' buffer for the row → nodes lists once the index
+ * is let go, before edges.
  * Cost: O(n·L·d) at worst for n rows, L landmarks, d features, plus the loops step.
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
@@ -115,10 +117,10 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   };
 }
 
-/** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) in chunks as they were found. */
+/** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) as found, packed (search/packedLists.ts). */
 type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
-  | { readonly kind: "positions"; readonly offsets: readonly number[]; readonly pieces: readonly Uint32Array[]; readonly rowAt: Uint32Array };
+  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer };
 
 interface FoundNet {
   /** Landmark rows (of the prepared table), in the order chosen. */
@@ -134,8 +136,8 @@ interface FoundNet {
  * The scaled rows, their index, the landmarks and their balls, in a function of their own so that
  * the scaled rows and the index can be freed before edges and loops. Greedy and random nets run
  * on the index in tree order (search/treeOrderIndex.ts), which holds the only scaled copy of the
- * table, and keep their balls as found (no final copy); maximin keeps row numbers, because its
- * ties go to the lowest row. Laps the clock after scaling and after the net; the caller times
+ * table, and keep their balls as found, packed as varint gaps (no final copy); maximin keeps row
+ * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net; the caller times
  * the balls, which it turns into lists by row.
  */
 function landmarksAndBalls(
@@ -163,7 +165,7 @@ function landmarksAndBalls(
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;
     // visit the rows in file order (or the seed's order) at their tree positions
-    let lists = createListBuilder(n);
+    let lists = createListBuilder(n, { packed: true });
     const net = greedyBalls(index, params.radius, visitOrder(rowAt, rule, params.seed), { onProgress: netProgress, into: lists });
     const landmarkTime = lap();
     onProgress?.("members", 0);
@@ -171,11 +173,12 @@ function landmarksAndBalls(
       // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
-      lists = createListBuilder(n);
+      lists = createListBuilder(n, { packed: true });
       blockMembershipInto(lists, index, params.radius, net.landmarks, membersProgress);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
-    return { centers, balls: { kind: "positions", offsets: lists.offsets, pieces: listPieces(lists), rowAt }, prepared, scaleTime, landmarkTime };
+    // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes lists
+    return { centers, balls: { kind: "positions", lists, rowAt, spare: table.values.buffer as ArrayBuffer }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
   const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
@@ -200,7 +203,7 @@ function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint3
 
 /** For each row, the nodes whose balls hold it, ascending. */
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
-  return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeLists(balls.offsets, balls.pieces, rows, balls.rowAt);
+  return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare);
 }
 
 /** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */

@@ -1,7 +1,8 @@
 // listBuilder: lists appended into chunks and copied once must read back as their concatenation.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { appendList, closeLists, createListBuilder, finishLists, reserveLists } from "../../../src/core/search/listBuilder.ts";
+import { appendList, createListBuilder, finishLists } from "../../../src/core/search/listBuilder.ts";
+import { writeGroup } from "./support/listGroups.ts";
 
 describe("listBuilder", () => {
   it("gives the offsets and items of the plain concatenation, lists longer than a chunk included", () => {
@@ -32,19 +33,7 @@ describe("listBuilder reserved room", () => {
       fc.property(fc.array(fc.array(fc.array(fc.nat(1000), { maxLength: 30_000 }), { maxLength: 4 }), { maxLength: 6 }), (groups) => {
         const reserved = createListBuilder(0);
         const appended = createListBuilder(0);
-        for (const lists of groups) {
-          const total = lists.reduce((sum, list) => sum + list.length, 0);
-          const room = reserveLists(reserved, total);
-          const ends: number[] = [];
-          let at = 0;
-          for (const list of lists) {
-            room.set(list, at);
-            at += list.length;
-            ends.push(at);
-            appendList(appended, Uint32Array.from(list));
-          }
-          closeLists(reserved, ends);
-        }
+        for (const lists of groups) writeGroup(reserved, appended, lists);
         expect(finishLists(reserved)).toEqual(finishLists(appended));
       }),
       { numRuns: 30 },
