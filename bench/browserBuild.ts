@@ -3,11 +3,12 @@
 // bench/results/browser.json). Probes: User Timing marks the app sets (build requested → first
 // frame drawn with the result; Cancel → "cancelled" answer), a PerformanceObserver for long tasks
 // on the main thread, the worker's memory from the DevTools protocol's Runtime.getHeapUsage
-// (JS heap + array buffer contents, sampled every 50 ms during the builds; it includes the table,
-// which the worker shares with the main thread) and the main thread's from its
-// Performance.getMetrics JSHeapUsedSize (typed-array contents not included). Build times are medians of three:
-// three warm builds in Node, three requests in the page (the radius nudged by 10⁻¹² so each is a
-// new request with the same graph); "request→answer" is the worker's part, "→drawn" adds the
+// (JS heap + array buffer contents, sampled every 50 ms during the builds, from a collected heap;
+// it includes the table, which the worker shares with the main thread) and the main thread's
+// from its Performance.getMetrics JSHeapUsedSize (typed-array contents not included).
+// Build times are medians: six warm builds in Node (three before the page's and three after, as
+// the machine's speed drifts), three requests in the page (the radius nudged by 10⁻¹² so each is
+// a new request with the same graph); "request→answer" is the worker's part, "→drawn" adds the
 // main thread's render and the first drawing. Long tasks are reported for the load (file chosen
 // → first graph drawn) and for the builds (first request → 1 s after the last drawing).
 import { mkdir, mkdtemp, writeFile } from "node:fs/promises";
@@ -55,14 +56,18 @@ try {
     const features = c.table.columns.map((col) => col.name);
     const scaled = zScore(selectFeatures(c.table, features).table).table;
     const { radius, landmarks } = calibrateRadius(scaled, euclidean, c.landmarks, 0.1);
+    const nodeParams = { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 } as const;
     const nodeTimes: number[] = [];
-    let nodeResult = buildCover(c.table, { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 });
-    for (let r = 0; r < 3; ++r) {
-      const started = nodePerformance.now();
-      nodeResult = buildCover(c.table, { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 });
-      nodeTimes.push(nodePerformance.now() - started);
-    }
-    const nodeMs = median(nodeTimes);
+    let nodeResult = buildCover(c.table, nodeParams); // warm-up
+    // three Node builds before the browser's and three after: the machine's speed drifts within minutes
+    const timeNode = (): void => {
+      for (let r = 0; r < 3; ++r) {
+        const started = nodePerformance.now();
+        nodeResult = buildCover(c.table, nodeParams);
+        nodeTimes.push(nodePerformance.now() - started);
+      }
+    };
+    timeNode();
     const file = join(folder, `${c.table.rows}x${features.length}.csv`);
     await writeFile(file, toCsv(c.table));
 
@@ -85,13 +90,13 @@ try {
 
     // builds at r, r(1 + 10⁻¹²), r(1 + 2·10⁻¹²): the same graph, three requests; long tasks from the first request until 1 s after the last drawing
     await resetLongTasks(page);
-    workerMemory.reset();
     const answered: number[] = [];
     const drawn: number[] = [];
     let nodes = 0;
     let edges = 0;
     for (let k = 0; k < 3; ++k) {
       await workerMemory.collect(); // each build starts from a collected heap, as in the Node bench
+      if (k === 0) workerMemory.reset(); // after the collection: the load's garbage is not the build's
       await page.evaluate(() => performance.clearMarks());
       await page.locator("#radius-number").fill(String(radius * (1 + k * 1e-12)));
       await page.locator("#radius-number").press("Enter");
@@ -113,6 +118,8 @@ try {
     const drawnMs = median(drawn);
     const longest = await longestTask(page);
     const workerPeak = workerMemory.peak();
+    timeNode();
+    const nodeMs = median(nodeTimes);
 
     // cancel: start a build at half the radius (several times the landmarks), cancel it, time the worker's answer
     await page.evaluate(() => performance.clearMarks());
@@ -169,7 +176,7 @@ try {
 const headers = Object.keys(rows[0] ?? {});
 const widths = headers.map((h) => Math.max(h.length, ...rows.map((r) => String(r[h]).length)));
 const line = (cells: string[]): string => `| ${cells.map((c, i) => c.padEnd(widths[i]!)).join(" | ")} |`;
-console.log("cover build in the browser worker (headless Chromium) vs Node, medians of 3 builds each side");
+console.log("cover build in the browser worker (headless Chromium) vs Node: medians of 6 Node builds (3 before, 3 after the page's) and 3 page builds");
 console.log("probes: times = User Timing marks set by the app; long tasks = PerformanceObserver 'longtask'; worker peak = DevTools protocol Runtime.getHeapUsage (usedSize + backingStorageSize) in the worker every 50 ms, from a collected heap (HeapProfiler.collectGarbage) before each build, table included; main heap = DevTools protocol Performance.getMetrics JSHeapUsedSize");
 console.log(line(headers));
 console.log(line(widths.map((w) => "-".repeat(w))));

@@ -61,9 +61,9 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
     if (event.targetInfo.type === "worker") session = event.sessionId;
   });
   cdp.on("Target.receivedMessageFromTarget", (event) => {
-    const message = JSON.parse(event.message) as { id?: number; result?: unknown };
+    const message = JSON.parse(event.message) as { id?: number; result?: unknown; error?: { message?: string } };
     if (message.id === undefined) return;
-    waiting.get(message.id)?.(message.result);
+    waiting.get(message.id)?.(message.error ? new Error(message.error.message ?? "protocol error") : message.result);
     waiting.delete(message.id);
   });
   await cdp.send("Target.setAutoAttach", { autoAttach: true, waitForDebuggerOnStart: false, flatten: false });
@@ -87,7 +87,7 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
     busy = true;
     void call("Runtime.getHeapUsage", 2000)
       .then((result) => {
-        const usage = result as HeapUsage | undefined;
+        const usage = result instanceof Error ? undefined : (result as HeapUsage | undefined);
         if (!usage) return;
         if (usage.backingStorageSize === undefined && !warned) {
           warned = true;
@@ -100,7 +100,10 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
   return {
     reset: () => (peak = 0),
     peak: () => peak,
-    collect: async () => void (await call("HeapProfiler.collectGarbage", 30_000)),
+    collect: async () => {
+      const result = await call("HeapProfiler.collectGarbage", 30_000);
+      if (result === undefined || result instanceof Error) console.error(`worker memory probe: no collection before the build (${result instanceof Error ? result.message : "no reply"}); the peak may include older garbage`);
+    },
     stop: () => clearInterval(timer),
   };
 }

@@ -120,7 +120,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
 /** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) as found, packed (search/packedLists.ts). */
 type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
-  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer };
+  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer | null };
 
 interface FoundNet {
   /** Landmark rows (of the prepared table), in the order chosen. */
@@ -177,8 +177,11 @@ function landmarksAndBalls(
       blockMembershipInto(lists, index, params.radius, net.landmarks, membersProgress);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
-    // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes lists
-    return { centers, balls: { kind: "positions", lists, rowAt, spare: table.values.buffer as ArrayBuffer }, prepared, scaleTime, landmarkTime };
+    // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
+    // lists, when it is the build's own whole buffer (prepareFeatures makes it so; checked anyway)
+    const { buffer, byteOffset } = table.values;
+    const spare = buffer instanceof ArrayBuffer && byteOffset === 0 ? buffer : null;
+    return { centers, balls: { kind: "positions", lists, rowAt, spare }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
   const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
@@ -203,7 +206,7 @@ function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint3
 
 /** For each row, the nodes whose balls hold it, ascending. */
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
-  return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare);
+  return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
 }
 
 /** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */

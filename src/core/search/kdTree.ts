@@ -55,8 +55,8 @@ export function kdTree(points: Float64Array, dims: number, rows: number, leafSiz
   const start = new Uint32Array(capacity);
   const end = new Uint32Array(capacity);
   const firstChild = new Uint32Array(capacity);
-  // split keys in single precision: half the scratch, and the split choice never affects correctness
-  const keys = new Float32Array(rows);
+  // double precision: single-precision keys collapse where a column's offset dwarfs its spread (raw data, scaling "none"), and every split turns arbitrary
+  const keys = new Float64Array(rows);
   const low = new Float64Array(dims);
   const high = new Float64Array(dims);
   end[0] = rows;
@@ -135,7 +135,7 @@ function widest(coords: Float64Array, dims: number, from: number, to: number, st
 }
 
 /** Rearranges keys, rowAt and the rows of coords over [left, right] together so that position `nth` holds the key of rank nth. Hoare's FIND. */
-function selectNth(keys: Float32Array, rowAt: Uint32Array, coords: Float64Array, dims: number, left: number, right: number, nth: number): void {
+function selectNth(keys: Float64Array, rowAt: Uint32Array, coords: Float64Array, dims: number, left: number, right: number, nth: number): void {
   while (left < right) {
     const pivot = keys[nth]!;
     let i = left;

@@ -4,7 +4,8 @@ import type { CompressedLists } from "../graph/ballMembership.ts";
  * Ascending lists of integers below 2³² stored as gaps (the first value, then each value minus
  * the one before) in LEB128 varints: 7 bits a byte, the high bit set on every byte but the last.
  * Balls in tree order are runs of neighbouring positions, so most gaps take one byte instead of
- * four. Each list is written whole into one chunk; chunks are trimmed when full.
+ * four. Each list is written whole into one chunk; a full chunk is kept as an exact copy of its
+ * bytes (a list longer than a chunk's room gets a chunk of its own, trimmed the same way).
  * Source of the varint: the LEB128 encoding of the DWARF standard (DWARF 5, §7.6), unsigned form.
  */
 export interface PackedStore {
@@ -25,7 +26,8 @@ export function createPackedStore(): PackedStore {
 export function packList(store: PackedStore, list: Uint32Array): void {
   const worst = 5 * list.length;
   if (store.used + worst > store.current.length) {
-    store.chunks.push(store.current.subarray(0, store.used));
+    // a copy of the bytes written, not a view: a view would keep the whole chunk alive
+    if (store.used > 0) store.chunks.push(store.current.slice(0, store.used));
     store.current = new Uint8Array(Math.max(chunkBytes, worst));
     store.used = 0;
   }
@@ -94,12 +96,15 @@ export function unpackLists(offsets: readonly number[], store: PackedStore): Com
  * transposeLists (graph/ballMembership.ts) of packed lists, without unpacking them first: for
  * each of `rows` rows the lists holding it, ascending; item x stands for row rowOf[x]. Two passes
  * over the bytes (count, then place). With `spare`, a buffer nothing else reads any more, the
- * result is placed in it when it fits, so that its memory is reused instead of left for the
- * collector. O(bytes + rows).
+ * result is placed at its start when it fits and fills at least half of it, so that its memory is
+ * reused instead of left for the collector. O(bytes + rows).
  */
 export function transposePacked(offsets: readonly number[], store: PackedStore, rows: number, rowOf: Uint32Array, spare?: ArrayBuffer): CompressedLists {
   const total = offsets[offsets.length - 1] ?? 0;
-  const fits = spare !== undefined && 4 * (rows + 1 + total) <= spare.byteLength;
+  const bytes = 4 * (rows + 1 + total);
+  // reuse only a buffer the result fills at least half of: otherwise holding the rest for the
+  // remaining steps would cost more than the buffer the result needs
+  const fits = spare !== undefined && bytes <= spare.byteLength && 2 * bytes >= spare.byteLength;
   const counts = fits ? new Uint32Array(spare, 0, rows + 1).fill(0) : new Uint32Array(rows + 1);
   decode(offsets, store, null, counts, rowOf);
   for (let i = 0; i < rows; ++i) counts[i + 1]! += counts[i]!;

@@ -61,25 +61,38 @@ describe("packed lists", () => {
             rows: fc.constant(rows),
             lists: fc.array(fc.uniqueArray(fc.integer({ min: 0, max: rows - 1 }), { maxLength: rows }).map((xs) => Uint32Array.from(xs.sort((a, b) => a - b))), { maxLength: 10 }),
             shift: fc.nat(),
-            spareBytes: fc.constantFrom(0, 64, 4096),
+            spareShare: fc.constantFrom(0, 1, 1.5, 3), // the spare buffer's size as a share of what the result needs
           }),
         ),
-        ({ rows, lists, shift, spareBytes }) => {
+        ({ rows, lists, shift, spareShare }) => {
           const rowOf = Uint32Array.from({ length: rows }, (_, x) => (x + shift) % rows);
           const packed = createListBuilder(0, { packed: true });
           for (const list of lists) appendList(packed, list);
           const offsets = [0];
           for (const list of lists) offsets.push(offsets.at(-1)! + list.length);
           const expected = transposeLists(offsets, lists, rows, rowOf);
+          const need = 4 * (rows + 1 + offsets.at(-1)!);
+          const spareBytes = 8 * Math.ceil((spareShare * need) / 8);
           const spare = new ArrayBuffer(spareBytes);
           new Float64Array(spare).fill(Math.PI); // stale contents must not leak into the counts
           const got = transposeBuilt(packed, rows, rowOf, spare);
           expect(Array.from(got.offsets)).toEqual(Array.from(expected.offsets));
           expect(Array.from(got.items)).toEqual(Array.from(expected.items));
-          expect(got.items.buffer === spare).toBe(4 * (rows + 1 + offsets.at(-1)!) <= spareBytes);
+          // used when the result fits and fills at least half of it
+          expect(got.items.buffer === spare).toBe(need <= spareBytes && 2 * need >= spareBytes);
         },
       ),
     );
+  });
+
+  it("keeps full chunks as exact copies, so no unused chunk space stays alive", () => {
+    const store = createPackedStore();
+    packList(store, Uint32Array.from({ length: 1000 }, (_, i) => i)); // 1,000 one-byte gaps
+    packList(store, Uint32Array.from({ length: 300_000 }, (_, i) => i)); // too long for the room left: a chunk of its own
+    packList(store, Uint32Array.of(7)); // fits in the rest of that chunk (5 bytes a value reserved)
+    const pieces = packedPieces(store);
+    expect(pieces.map((p) => p.length)).toEqual([1000, 300_001]);
+    expect(pieces[0]!.buffer.byteLength).toBe(1000); // the full chunk: an exact copy, not a view of 2²⁰ bytes
   });
 
   it("refuses a list that descends", () => {
