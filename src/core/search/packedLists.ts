@@ -4,8 +4,9 @@ import type { CompressedLists } from "../graph/ballMembership.ts";
  * Ascending lists of integers below 2³² stored as gaps (the first value, then each value minus
  * the one before) in LEB128 varints: 7 bits a byte, the high bit set on every byte but the last.
  * Balls in tree order are runs of neighbouring positions, so most gaps take one byte instead of
- * four. Each list is written whole into one chunk; a full chunk is kept as an exact copy of its
- * bytes (a list longer than a chunk's room gets a chunk of its own, trimmed the same way).
+ * four. Each list is written whole into one chunk; a full chunk is kept as it is when at least
+ * 7/8 used, else as an exact copy of its bytes (a list longer than a chunk's room gets a chunk of
+ * its own, often far from full).
  * Source of the varint: the LEB128 encoding of the DWARF standard (DWARF 5, §7.6), unsigned form.
  */
 export interface PackedStore {
@@ -26,8 +27,10 @@ export function createPackedStore(): PackedStore {
 export function packList(store: PackedStore, list: Uint32Array): void {
   const worst = 5 * list.length;
   if (store.used + worst > store.current.length) {
-    // a copy of the bytes written, not a view: a view would keep the whole chunk alive
-    if (store.used > 0) store.chunks.push(store.current.slice(0, store.used));
+    // a view of a nearly full chunk; a copy of a chunk with much room left (a long ball reserves
+    // five bytes a value and often uses one or two), since a view would keep the whole of it alive
+    if (store.used >= 0.875 * store.current.length) store.chunks.push(store.current.subarray(0, store.used));
+    else if (store.used > 0) store.chunks.push(store.current.slice(0, store.used));
     store.current = new Uint8Array(Math.max(chunkBytes, worst));
     store.used = 0;
   }

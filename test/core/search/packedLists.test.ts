@@ -85,7 +85,7 @@ describe("packed lists", () => {
     );
   });
 
-  it("keeps full chunks as exact copies, so no unused chunk space stays alive", () => {
+  it("keeps a chunk with much room left as an exact copy, so its unused space does not stay alive", () => {
     const store = createPackedStore();
     packList(store, Uint32Array.from({ length: 1000 }, (_, i) => i)); // 1,000 one-byte gaps
     packList(store, Uint32Array.from({ length: 300_000 }, (_, i) => i)); // too long for the room left: a chunk of its own
@@ -93,6 +93,15 @@ describe("packed lists", () => {
     const pieces = packedPieces(store);
     expect(pieces.map((p) => p.length)).toEqual([1000, 300_001]);
     expect(pieces[0]!.buffer.byteLength).toBe(1000); // the full chunk: an exact copy, not a view of 2²⁰ bytes
+  });
+
+  it("keeps a nearly full chunk as it is (no copy)", () => {
+    const store = createPackedStore();
+    const list = Uint32Array.from({ length: 1000 }, (_, i) => i); // 1,000 bytes, 5,000 reserved
+    for (let k = 0; k < 1100; ++k) packList(store, list); // 2²⁰ bytes hold 1,044 lists with room for the worst case
+    const first = packedPieces(store)[0]!;
+    expect(first.length).toBeGreaterThanOrEqual(0.875 * 2 ** 20);
+    expect(first.buffer.byteLength).toBe(2 ** 20);
   });
 
   it("refuses a list that descends", () => {
