@@ -7,7 +7,8 @@ import type { CompressedLists } from "../graph/ballMembership.ts";
  * four. Each list is written whole into one chunk; a full chunk is kept as it is when at least
  * 7/8 used, else as an exact copy of its bytes (a list longer than a chunk's room gets a chunk of
  * its own, often far from full).
- * Source of the varint: the LEB128 encoding of the DWARF standard (DWARF 5, §7.6), unsigned form.
+ * Source of the varint: the unsigned LEB128 encoding of the DWARF debugging standard (version 5,
+ * section 7.6 "Variable Length Data"; the section number from memory).
  */
 export interface PackedStore {
   readonly chunks: Uint8Array[];

@@ -1,4 +1,4 @@
-// Packed lists (varint gaps, LEB128 unsigned as in DWARF 5 §7.6): they must read back exactly as
+// Packed lists (varint gaps, unsigned LEB128 as in the DWARF standard, version 5, section 7.6 from memory): they must read back exactly as
 // written, and their transposition must equal transposeLists of the plain lists.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
