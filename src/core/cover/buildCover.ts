@@ -137,8 +137,8 @@ interface FoundNet {
  * the scaled rows and the index can be freed before edges and loops. Greedy and random nets run
  * on the index in tree order (search/treeOrderIndex.ts), which holds the only scaled copy of the
  * table, and keep their balls as found, packed as varint gaps (no final copy); maximin keeps row
- * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net; the caller times
- * the balls, which it turns into lists by row.
+ * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net;
+ * the caller times the balls, which it turns into lists by row.
  */
 function landmarksAndBalls(
   parsed: ParsedTable,

@@ -63,14 +63,9 @@ export function reserveLists(builder: ListBuilder, total: number): Uint32Array {
 export function closeLists(builder: ListBuilder, ends: ArrayLike<number>): void {
   const total = ends.length > 0 ? ends[ends.length - 1]! : 0;
   const { packed } = builder;
-  if (packed) {
-    for (let l = 0, start = 0; l < ends.length; start = ends[l++]!) packList(packed, packed.room.subarray(start, ends[l]!));
-    for (let l = 0; l < ends.length; ++l) builder.offsets.push(builder.size + ends[l]!);
-    builder.size += total;
-    return;
-  }
+  if (packed) for (let l = 0, start = 0; l < ends.length; start = ends[l++]!) packList(packed, packed.room.subarray(start, ends[l]!));
+  else builder.used += total;
   for (let l = 0; l < ends.length; ++l) builder.offsets.push(builder.size + ends[l]!);
-  builder.used += total;
   builder.size += total;
 }
 

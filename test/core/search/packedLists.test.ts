@@ -1,5 +1,6 @@
-// Packed lists (varint gaps, unsigned LEB128 as in the DWARF standard, version 5, section 7.6 from memory): they must read back exactly as
-// written, and their transposition must equal transposeLists of the plain lists.
+// Packed lists (varint gaps, unsigned LEB128 as in the DWARF standard, version 5, section 7.6,
+// the section number from memory): they must read back exactly as written, and their
+// transposition must equal transposeLists of the plain lists.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { transposeLists } from "../../../src/core/graph/ballMembership.ts";
