@@ -56,7 +56,7 @@ try {
     const features = c.table.columns.map((col) => col.name);
     const scaled = zScore(selectFeatures(c.table, features).table).table;
     const { radius, landmarks } = calibrateRadius(scaled, euclidean, c.landmarks, 0.1);
-    const nodeParams = { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 } as const;
+    const nodeParams = { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy-file-order", seed: 1 } as const;
     const nodeTimes: number[] = [];
     let nodeResult = buildCover(c.table, nodeParams); // warm-up
     // three Node builds before the browser's and three after: the machine's speed drifts within minutes

@@ -42,7 +42,7 @@ for (const c of cases) {
   const features = parsed.columns.map((column) => column.name);
   const scaled = scaleTable(selectFeatures(parsed, features, "drop").table, "zscore").table;
   const calibration = calibrateRadius(scaled, euclidean, 1000, 0.1);
-  const params: CoverParams = { features, scale: "zscore", metric: "euclidean", radius: calibration.radius, landmarks: "greedy", seed: 1 };
+  const params: CoverParams = { features, scale: "zscore", metric: "euclidean", radius: calibration.radius, landmarks: "greedy-file-order", seed: 1 };
   const runs: { result: CoverResult; total: number; cpu: number; peak: number }[] = [];
   for (let r = 0; r < repeatsFor(c.rows); ++r) {
     const probe = memoryProbe();

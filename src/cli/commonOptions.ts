@@ -7,7 +7,7 @@ export const commonOptionSpec = {
   outcome: { type: "string" },
   scale: { type: "string", default: "zscore" },
   metric: { type: "string", default: "euclidean" },
-  landmarks: { type: "string", default: "greedy" },
+  landmarks: { type: "string", default: "greedy-file-order" },
   seed: { type: "string", default: "1" },
   missing: { type: "string", default: "drop" },
   weights: { type: "string" },
@@ -49,7 +49,7 @@ export function readCommonOptions(values: { readonly [K in keyof typeof commonOp
     params: {
       scale: maybeScale(values.scale ?? "zscore"),
       metric: maybeMetric(values.metric ?? "euclidean").name,
-      landmarks: maybeLandmarkRule(values.landmarks ?? "greedy"),
+      landmarks: maybeLandmarkRule(values.landmarks ?? "greedy-file-order"),
       seed,
       missing: maybeMissingPolicy(values.missing ?? "drop"),
       weights: parseWeights(listOption(values.weights)),

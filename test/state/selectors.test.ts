@@ -44,7 +44,7 @@ describe("selectors", () => {
   });
 
   it("give the build parameters once a table, a feature and a positive radius exist", () => {
-    expect(selectCoverParams(state())).toMatchObject({ features: ["x"], scale: "zscore", metric: "euclidean", radius, landmarks: "greedy", seed: 1 });
+    expect(selectCoverParams(state())).toMatchObject({ features: ["x"], scale: "zscore", metric: "euclidean", radius, landmarks: "greedy-file-order", seed: 1 });
     expect(selectCoverParams(state({ radius: NaN }))).toBeNull();
     expect(selectCoverParams(state({ roles: { ...roles, x: "ignore" } }))).toBeNull();
   });

@@ -5,7 +5,7 @@ describe("createWorkbenchStore", () => {
   it("starts idle, with no table, no result, z-scores, the euclidean metric, greedy landmarks, seed 1 and no radius", () => {
     const s = createWorkbenchStore().getState();
     expect(s).toMatchObject({ source: null, table: null, loadStatus: "idle", loadError: null, result: null, selectedNode: null, colorBy: null });
-    expect(s).toMatchObject({ scale: "zscore", metric: "euclidean", landmarks: "greedy", seed: 1, roles: {} });
+    expect(s).toMatchObject({ scale: "zscore", metric: "euclidean", landmarks: "greedy-file-order", seed: 1, roles: {} });
     expect(s.radius).toBeNaN();
     expect(s.build).toEqual({ state: "idle", phase: null, fraction: 0, error: null, elapsedMs: null });
     expect(s).toEqual(initialState);

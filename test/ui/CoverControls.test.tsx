@@ -46,15 +46,15 @@ it("the metric select offers Euclidean, selected by default, among one option pe
   expect((metric as HTMLSelectElement).value).toBe("euclidean");
 });
 
-it("the seed field is disabled in file order and enabled after choosing 'seeded shuffle'", async () => {
+it("the seed field is disabled in file order and enabled after choosing 'greedy, seeded shuffle'", async () => {
   const user = userEvent.setup();
   render(<CoverControls />);
   await loadSmallTable();
   const seed = screen.getByRole("spinbutton", { name: "Seed" }) as HTMLInputElement;
   const order = screen.getByRole("combobox", { name: "Landmark order" });
-  expect((order as HTMLSelectElement).value).toBe("greedy");
+  expect((order as HTMLSelectElement).value).toBe("greedy-file-order");
   expect(seed.disabled).toBe(true);
-  await user.selectOptions(order, "seeded shuffle");
+  await user.selectOptions(order, "greedy, seeded shuffle");
   expect(seed.disabled).toBe(false);
-  await waitFor(() => expect(workbenchStore.getState().result?.params.landmarks).toBe("random"));
+  await waitFor(() => expect(workbenchStore.getState().result?.params.landmarks).toBe("greedy-shuffled"));
 });

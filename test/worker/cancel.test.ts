@@ -6,7 +6,7 @@ import { lane, type Progress, type Request } from "../../src/worker/protocol.ts"
 
 const rows = Array.from({ length: 200 }, (_, i) => `${i % 17},${(i * 7) % 23}`);
 const csv = `x,y\n${rows.join("\n")}\n`;
-const params: CoverParams = Object.freeze({ features: ["x", "y"], scale: "zscore", metric: "euclidean", radius: 0.3, landmarks: "greedy", seed: 1 });
+const params: CoverParams = Object.freeze({ features: ["x", "y"], scale: "zscore", metric: "euclidean", radius: 0.3, landmarks: "greedy-file-order", seed: 1 });
 const ignore = (): void => {};
 
 describe("worker cancellation", () => {

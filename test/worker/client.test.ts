@@ -19,7 +19,7 @@ describe("worker client without a Worker (in-thread fallback)", () => {
     await client.send({ type: "load", source: { kind: "text", text: "x\n1\n2\n4\n" }, options: {} });
     const reports: Progress[] = [];
     const answer = await client.send(
-      { type: "build", params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy", seed: 1 } },
+      { type: "build", params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy-file-order", seed: 1 } },
       (p) => reports.push(p),
     );
     expect(answer).toMatchObject({ id: 2, type: "built" });

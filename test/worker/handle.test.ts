@@ -5,7 +5,7 @@ import { createHandler, transferables } from "../../src/worker/handle.ts";
 import type { Answer, Progress, Request } from "../../src/worker/protocol.ts";
 
 const csv = "name,x,y\na,0,0\nb,1,0\nc,0,1\nd,5,5\n";
-const params: CoverParams = Object.freeze({ features: ["x", "y"], scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy", seed: 1 });
+const params: CoverParams = Object.freeze({ features: ["x", "y"], scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy-file-order", seed: 1 });
 const ignore = (): void => {};
 
 /** A handler with a table loaded. */

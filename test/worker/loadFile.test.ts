@@ -48,7 +48,7 @@ describe("worker: loading a file", () => {
     const big = new Blob([`a\n${Array.from({ length: 3_000_000 }, (_, i) => i).join("\n")}\n`]);
     const answer = await handle({ id: 2, type: "load", source: { kind: "file", file: big }, options: {} }, () => (stop = true));
     expect(answer).toEqual({ id: 2, type: "cancelled" });
-    const built = await handle({ id: 3, type: "build", params: { features: ["x"], scale: "none", metric: "euclidean", radius: 1, landmarks: "greedy", seed: 1 } }, () => {});
+    const built = await handle({ id: 3, type: "build", params: { features: ["x"], scale: "none", metric: "euclidean", radius: 1, landmarks: "greedy-file-order", seed: 1 } }, () => {});
     expect(built).toMatchObject({ type: "built", result: { rowsRead: 2 } }); // still the first table
   });
 

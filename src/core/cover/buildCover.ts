@@ -198,7 +198,7 @@ function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint3
   const n = rowAt.length;
   const positionOf = new Uint32Array(n);
   for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
-  if (rule !== "random") return positionOf;
+  if (rule !== "greedy-shuffled") return positionOf;
   const order = shuffledOrder(n, randomSource(seed));
   for (let k = 0; k < n; ++k) order[k] = positionOf[order[k]!]!;
   return order;
@@ -216,6 +216,6 @@ function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule, seed:
     if (n === 0) return { landmarks: new Uint32Array(0), members: { offsets: Uint32Array.of(0), items: new Uint32Array(0) } };
     return maximinBalls(index, radius, Math.floor(randomSource(seed)() * n), { onProgress: (done, total) => onProgress(done / total) });
   }
-  const order = rule === "random" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
+  const order = rule === "greedy-shuffled" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
   return greedyBalls(index, radius, order, { onProgress: (done, total) => onProgress(done / total) });
 }

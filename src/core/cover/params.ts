@@ -1,7 +1,7 @@
 import type { MetricName } from "../metric/types.ts";
 
 export type ScaleName = "none" | "zscore" | "minmax" | "robust";
-export type LandmarkRule = "greedy" | "random" | "maximin";
+export type LandmarkRule = "greedy-file-order" | "greedy-shuffled" | "maximin";
 /** What happens to a row with a missing feature value, before scaling. */
 export type MissingPolicy = "drop" | "median" | "mean";
 
@@ -11,7 +11,7 @@ export interface CoverParams {
   readonly scale: ScaleName;
   readonly metric: MetricName;
   readonly radius: number;
-  /** greedy: ε-net in file order; random: ε-net in an order shuffled by `seed`; maximin: farthest point from a seeded start. */
+  /** greedy-file-order: ε-net in file order; greedy-shuffled: ε-net in an order shuffled by `seed`; maximin: farthest point from a seeded start. */
   readonly landmarks: LandmarkRule;
   readonly seed: number;
   /** Factor per feature applied after scaling; absent features weigh 1. */
@@ -23,7 +23,9 @@ export interface CoverParams {
 }
 
 export const scaleNames: readonly ScaleName[] = ["zscore", "robust", "minmax", "none"];
-export const landmarkRules: readonly LandmarkRule[] = ["greedy", "random", "maximin"];
+export const landmarkRules: readonly LandmarkRule[] = ["greedy-file-order", "greedy-shuffled", "maximin"];
+/** Earlier names, still accepted on the command line and in old recipes. */
+export const landmarkRuleAliases: Readonly<Record<string, LandmarkRule>> = { greedy: "greedy-file-order", random: "greedy-shuffled" };
 export const missingPolicies: readonly MissingPolicy[] = ["drop", "median", "mean"];
 
 function maybeOneOf<T extends string>(names: readonly T[], what: string): (name: string) => T {
@@ -33,7 +35,9 @@ function maybeOneOf<T extends string>(names: readonly T[], what: string): (name:
   };
 }
 
-export const maybeLandmarkRule = maybeOneOf(landmarkRules, "landmark rule");
+const maybeLandmarkRuleName = maybeOneOf(landmarkRules, "landmark rule");
+export const maybeLandmarkRule = (name: string): LandmarkRule =>
+  Object.hasOwn(landmarkRuleAliases, name) ? landmarkRuleAliases[name]! : maybeLandmarkRuleName(name);
 export const maybeScale = maybeOneOf(scaleNames, "scaling");
 export const maybeMissingPolicy = maybeOneOf(missingPolicies, "missing-value policy");
 

@@ -6,7 +6,7 @@ import { greedyNet, type NetOptions } from "./greedyNet.ts";
 import { maximinNet } from "./maximinNet.ts";
 
 /**
- * Landmarks by rule: "greedy" visits rows in file order, "random" in an order shuffled by the
+ * Landmarks by rule: "greedy-file-order" visits rows in file order, "greedy-shuffled" in an order shuffled by the
  * seeded generator, "maximin" starts at the row floor(u · n) for the seed's first draw u.
  * Every rule returns an r-net under the metric's reference predicate. `options.index` reuses a
  * candidate index built for this table and metric.
@@ -25,6 +25,6 @@ export function chooseLandmarks(
     if (table.rows === 0) return new Uint32Array(0);
     return maximinNet(table, metric, radius, Math.floor(randomSource(seed)() * table.rows), progress, options);
   }
-  const order = rule === "random" ? shuffledOrder(table.rows, randomSource(seed)) : Uint32Array.from({ length: table.rows }, (_, i) => i);
+  const order = rule === "greedy-shuffled" ? shuffledOrder(table.rows, randomSource(seed)) : Uint32Array.from({ length: table.rows }, (_, i) => i);
   return greedyNet(table, metric, radius, order, progress, options);
 }

@@ -47,7 +47,7 @@ export interface SeedStability {
 }
 
 /**
- * Seed stability at one radius: k builds with the "random" landmark rule and seeds seed, seed + 1,
+ * Seed stability at one radius: k builds with the "greedy-shuffled" landmark rule and seeds seed, seed + 1,
  * …, each equal to buildCover's with that seed (rows scaled and indexed once); the spread of nodes,
  * edges, b0 and b1; co-membership agreement
  *   A(X, Y) = |{pairs of X sharing a node that also share a node in Y}| / |{pairs of X sharing a node}|,
@@ -64,7 +64,7 @@ export function seedStability(parsed: ParsedTable, params: CoverParams, options:
   if (!Number.isInteger(count) || count < 2) throw new Error(`invalid seed count: ${count}`);
   if (!Number.isInteger(pairSample) || pairSample < 1) throw new Error(`invalid pair sample: ${pairSample}`);
   if (!(params.radius > 0) || !Number.isFinite(params.radius)) throw new Error(`invalid radius: ${params.radius}`);
-  const prepared = prepareRows(parsed, { ...params, landmarks: "random" }, options, "the seed stability run");
+  const prepared = prepareRows(parsed, { ...params, landmarks: "greedy-shuffled" }, options, "the seed stability run");
   const selected = selection ? selectionMask(selection, prepared.usedRows, parsed.rows) : null;
   const seeds = Float64Array.from({ length: count }, (_, s) => params.seed + s);
   const builds: Balls[] = [];
@@ -73,7 +73,7 @@ export function seedStability(parsed: ParsedTable, params: CoverParams, options:
   for (let s = 0; s < count; ++s) {
     checkStop(options, "the seed stability run");
     const part: RunControl = { ...(options.shouldStop ? { shouldStop: options.shouldStop } : {}), onProgress: (f) => options.onProgress?.((0.8 * (s + f)) / count) };
-    const balls = netWithBalls(prepared.index, params.radius, "random", seeds[s]!, part);
+    const balls = netWithBalls(prepared.index, params.radius, "greedy-shuffled", seeds[s]!, part);
     const cover = coverFromBalls(prepared, params.radius, balls, part);
     builds.push(balls);
     figures.nodes[s] = balls.landmarks.length;

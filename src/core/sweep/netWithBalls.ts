@@ -27,7 +27,7 @@ export interface Balls {
  * floor(u · n) for the seed's first draw u, balls by ballMembership when it returns none.
  * Source: S. Har-Peled, Geometric Approximation Algorithms, AMS 2011, §4.2 (greedy nets).
  * Cost: L ball queries through the index, O(n·d) each at worst.
- * @example netWithBalls(createRowIndex(line 0, 1, 2, 3, euclidean), 1, "greedy", 1).landmarks // => Uint32Array [0, 2]
+ * @example netWithBalls(createRowIndex(line 0, 1, 2, 3, euclidean), 1, "greedy-file-order", 1).landmarks // => Uint32Array [0, 2]
  */
 export function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule, seed: number, control: RunControl = {}): Balls {
   const n = index.table.rows;
@@ -42,7 +42,7 @@ export function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule
     landmarks = net.landmarks;
     members = net.members ?? ballMembership(index.table, index.metric, radius, landmarks, onProgress, { index });
   } else if (rule !== "maximin") {
-    const order = rule === "random" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
+    const order = rule === "greedy-shuffled" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
     const covered = new Uint8Array(n);
     const chosen: number[] = [];
     const builder = createListBuilder(n);

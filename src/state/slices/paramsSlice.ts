@@ -25,7 +25,7 @@ export const initialParams: ParamsSlice = {
   scale: "zscore",
   metric: "euclidean",
   radius: NaN,
-  landmarks: "greedy",
+  landmarks: "greedy-file-order",
   seed: 1,
   missing: "drop",
   weights: {},

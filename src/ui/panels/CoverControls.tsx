@@ -11,7 +11,7 @@ const metricLabel: Record<string, string> = {
   cosine: "cosine (1 − cos)",
   correlation: "correlation (1 − r)",
 };
-const orderLabel: Record<LandmarkRule, string> = { greedy: "file order", random: "seeded shuffle", maximin: "farthest point" };
+const orderLabel: Record<LandmarkRule, string> = { "greedy-file-order": "greedy, file order", "greedy-shuffled": "greedy, seeded shuffle", maximin: "maximin (farthest point)" };
 const scaleLabel: Record<ScaleName, string> = { zscore: "z-score", robust: "median / IQR", minmax: "min–max [0, 1]", none: "none (raw units)" };
 const scaleNote: Record<ScaleName, string> = {
   zscore: "Each feature: (x − mean) / sample standard deviation (n − 1).",

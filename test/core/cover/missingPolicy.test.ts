@@ -14,7 +14,7 @@ import { allLists } from "../support/bruteForce.ts";
 const parsed = Object.freeze(parseCsvText("x,y,z\n1,10,5\nNA,20,6\n2,,7\n6,40,8\n9,NA,9\n"));
 
 const params = (patch: Partial<CoverParams>): CoverParams =>
-  Object.freeze({ features: ["x", "y"], scale: "none", metric: "euclidean", radius: 0.5, landmarks: "greedy", seed: 1, ...patch });
+  Object.freeze({ features: ["x", "y"], scale: "none", metric: "euclidean", radius: 0.5, landmarks: "greedy-file-order", seed: 1, ...patch });
 
 describe("selectFeatures missing-value policies", () => {
   it("median fills x with 4 and y with 20, keeps every row and counts 1 and 2 imputed values", () => {

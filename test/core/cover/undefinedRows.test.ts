@@ -40,7 +40,7 @@ describe("excludeUndefinedRows", () => {
 
 describe("buildCover reports undefined rows", () => {
   const params = (patch: Partial<CoverParams>): CoverParams =>
-    Object.freeze({ features: ["a", "b"], scale: "none", metric: "cosine", radius: 0.5, landmarks: "greedy", seed: 1, ...patch });
+    Object.freeze({ features: ["a", "b"], scale: "none", metric: "cosine", radius: 0.5, landmarks: "greedy-file-order", seed: 1, ...patch });
 
   it("cosine, scale none: zero rows 1 and 3 are undefined, row 2 (missing a) is dropped, rows 0 and 4 are used", () => {
     const parsed = parseCsvText("a,b\n1,2\n0,0\nNA,1\n0,0\n3,4\n");
@@ -87,7 +87,7 @@ describe("buildCover reports undefined rows", () => {
         const names = Array.from({ length: c.columns }, (_, j) => `c${j + 1}`);
         const rows = cells.map((row, i) => (i === 0 ? row.map((x) => (Number.isNaN(x) ? 0 : x)) : row)); // row 0 complete, so no column is all missing
         const parsed = parsedTable(names, rows);
-        const result = buildCover(parsed, { features: names, scale: c.scale, metric: c.metric.name, radius: 0.75, landmarks: "greedy", seed: 1, missing: c.missing });
+        const result = buildCover(parsed, { features: names, scale: c.scale, metric: c.metric.name, radius: 0.75, landmarks: "greedy-file-order", seed: 1, missing: c.missing });
         const selection = selectFeatures(parsed, names, c.missing);
         const expected = excludeUndefinedRows(scaleTable(selection.table, c.scale).table, c.metric, selection.usedRows);
         expect(Array.from(result.undefinedRows)).toEqual(Array.from(expected.undefinedRows));

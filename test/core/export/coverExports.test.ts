@@ -3,7 +3,7 @@ import { buildCover, coverExports, exportSchemaVersion, parseCsvText, type Cover
 import { lineCsv, lineSd } from "../support/lineCsv.ts";
 
 const parsed = parseCsvText(lineCsv);
-const params: CoverParams = { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1.5 / lineSd, landmarks: "greedy", seed: 1 };
+const params: CoverParams = { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1.5 / lineSd, landmarks: "greedy-file-order", seed: 1 };
 const result = buildCover(parsed, params);
 const context = { fileName: "line.csv", fileSize: 123, idColumn: "id", outcomes: ["y"] } as const;
 const files = coverExports(parsed, result, context);
@@ -36,7 +36,7 @@ describe("coverExports", () => {
       schema: "shoal-cover-export",
       schemaVersion: 1,
       input: { fileName: "line.csv", fileSize: 123 },
-      params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1.5 / lineSd, landmarks: "greedy", seed: 1, idColumn: "id", outcomes: ["y"] },
+      params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1.5 / lineSd, landmarks: "greedy-file-order", seed: 1, idColumn: "id", outcomes: ["y"] },
       rows: { read: 7, used: 6, dropped: 1, firstDroppedRows: [3] }, // worked by hand: record 3 (p3) has no x
       constantColumns: [],
       nodes: 3, // worked by hand

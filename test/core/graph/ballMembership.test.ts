@@ -4,8 +4,8 @@ import { ballMembership, euclidean, greedyNet, randomSource, rowsToNodes, shuffl
 import { allLists, bruteBalls, isWithin } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 
-const orderFor = (rows: number, { rule, seed }: { rule: "greedy" | "random"; seed: number }): Uint32Array =>
-  rule === "random" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
+const orderFor = (rows: number, { rule, seed }: { rule: "greedy-file-order" | "greedy-shuffled"; seed: number }): Uint32Array =>
+  rule === "greedy-shuffled" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
 
 describe("ballMembership", () => {
   it("the JSDoc example: 0, 1, 2, 3 with r = 1 around rows 0 and 2 gives offsets 0, 2, 5 and items 0, 1, 1, 2, 3", () => {

@@ -4,8 +4,8 @@ import { ballMembership, euclidean, greedyNet, overlapEdges, randomSource, rowsT
 import { allLists, bruteEdges } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 
-const orderFor = (rows: number, { rule, seed }: { rule: "greedy" | "random"; seed: number }): Uint32Array =>
-  rule === "random" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
+const orderFor = (rows: number, { rule, seed }: { rule: "greedy-file-order" | "greedy-shuffled"; seed: number }): Uint32Array =>
+  rule === "greedy-shuffled" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
 
 const plain = (edges: { source: Uint32Array; target: Uint32Array; shared: Uint32Array }) => ({
   source: Array.from(edges.source),

@@ -6,8 +6,8 @@ import { ballMembership, components, euclidean, greedyNet, overlapEdges, randomS
 import { allLists } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 
-const orderFor = (rows: number, { rule, seed }: { rule: "greedy" | "random"; seed: number }): Uint32Array =>
-  rule === "random" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
+const orderFor = (rows: number, { rule, seed }: { rule: "greedy-file-order" | "greedy-shuffled"; seed: number }): Uint32Array =>
+  rule === "greedy-shuffled" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
 
 /** A table with its rows permuted: new row p is old row `permutation[p]`. */
 const permuted = (table: NumericTable, permutation: readonly number[]): NumericTable => {

@@ -38,7 +38,7 @@ import { allLists } from "../support/bruteForce.ts";
 import { parsedTable } from "../support/parsedTable.ts";
 
 function build(points: number[][], radius: number): CoverResult {
-  return buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius, landmarks: "greedy", seed: 1 });
+  return buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius, landmarks: "greedy-file-order", seed: 1 });
 }
 
 /** A radius strictly inside [c(k), c(k + 1)): c(k) + t · (c(k + 1) − c(k)) for t in [0.01, 0.99]. */

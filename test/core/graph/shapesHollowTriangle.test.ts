@@ -30,7 +30,7 @@ describe("three balls overlapping in pairs only", () => {
   it("for √45 ≤ r < √117: balls {0, 3, 4}, {1, 3, 5}, {2, 4, 5}, three edges, no triangle, b1 = 1 = cycleRank", () => {
     fc.assert(
       fc.property(radius, (r) => {
-        const result = buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius: r, landmarks: "greedy", seed: 1 });
+        const result = buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius: r, landmarks: "greedy-file-order", seed: 1 });
         expect(Array.from(result.landmarks)).toEqual([0, 1, 2]); // worked by hand
         expect(allLists(result.members)).toEqual([[0, 3, 4], [1, 3, 5], [2, 4, 5]]); // worked by hand
         expect(Array.from(result.edges.shared)).toEqual([1, 1, 1]); // worked by hand
@@ -42,7 +42,7 @@ describe("three balls overlapping in pairs only", () => {
   });
 
   it("at r = fl(√45) every midpoint is still covered; just below √45 (r = 6.7) M02 becomes a landmark and covers M12", () => {
-    const at = (r: number) => buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius: r, landmarks: "greedy", seed: 1 });
+    const at = (r: number) => buildCover(parsedTable(["x", "y"], points), { features: ["x", "y"], scale: "none", metric: "euclidean", radius: r, landmarks: "greedy-file-order", seed: 1 });
     expect(Math.sqrt(45) * Math.sqrt(45)).toBeGreaterThanOrEqual(45); // r² as the predicate computes it: 45.00000000000001, so the tie is inside
     expect(at(Math.sqrt(45)).landmarks.length).toBe(3); // worked by hand
     // 6.7² = 44.89 < 45: M02 = (3, 6) is within r of no corner → landmark; M12 = (9, 6) is 6 from M02 → covered.

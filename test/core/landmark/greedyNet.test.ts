@@ -4,8 +4,8 @@ import { euclidean, greedyNet, randomSource, shuffledOrder, type NumericTable } 
 import { bruteGreedyNet, isWithin } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 
-const orderFor = (rows: number, { rule, seed }: { rule: "greedy" | "random"; seed: number }): Uint32Array =>
-  rule === "random" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
+const orderFor = (rows: number, { rule, seed }: { rule: "greedy-file-order" | "greedy-shuffled"; seed: number }): Uint32Array =>
+  rule === "greedy-shuffled" ? shuffledOrder(rows, randomSource(seed)) : Uint32Array.from({ length: rows }, (_, i) => i);
 
 describe("greedyNet", () => {
   it("the JSDoc example: 0, 1, 2 with r = 1 in file order gives landmarks 0 and 2", () => {

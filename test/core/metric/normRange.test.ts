@@ -45,7 +45,7 @@ describe("cosine and correlation on tiny or huge rows (known defect)", () => {
     // d(1, 2) = 1 − 3/√10 ≈ 0.051 ≤ 0.2 (worked by hand). Greedy in file order: 0 is a landmark, 1 is
     // not within 0.2 of 0 → landmark, 2 is within 0.2 of 1 → covered.
     const parsed = parsedTable(["a", "b"], [[1e-200, 0], [1, 1], [1, 2]]);
-    const result = buildCover(parsed, { features: ["a", "b"], scale: "none", metric: "cosine", radius: 0.2, landmarks: "greedy", seed: 1 });
+    const result = buildCover(parsed, { features: ["a", "b"], scale: "none", metric: "cosine", radius: 0.2, landmarks: "greedy-file-order", seed: 1 });
     expect(Array.from(result.landmarks)).toEqual([0, 1]); // worked by hand
     expect(allLists(result.members)).toEqual([[0], [1, 2]]); // worked by hand
   });
@@ -58,7 +58,7 @@ describe("cosine and correlation on tiny or huge rows (known defect)", () => {
     // 28/53 ≈ 0.528 (rows 0, 1) and 18/√1224 ≈ 0.514 (rows 2, 3 and 2, 4); all others are ≤ 0,
     // so every pair is more than 0.3 apart and each row is its own ball (worked by hand).
     const parsed = parsedTable(["a", "b"], [[0, 1], [1, 0], [2, 2], [3, 1], [1, 3]]);
-    const base = { features: ["a", "b"], scale: "zscore", metric: "cosine", radius: 0.3, landmarks: "greedy", seed: 1 } as const;
+    const base = { features: ["a", "b"], scale: "zscore", metric: "cosine", radius: 0.3, landmarks: "greedy-file-order", seed: 1 } as const;
     const plain = buildCover(parsed, base);
     const tiny = buildCover(parsed, { ...base, weights: { a: 1e-90, b: 1e-90 } });
     expect(allLists(plain.members)).toEqual([[0], [1], [2], [3], [4]]); // worked by hand, see above

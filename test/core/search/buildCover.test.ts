@@ -48,7 +48,7 @@ function plainBuild(parsed: ParsedTable, params: CoverParams) {
       ? n === 0
         ? []
         : plainMaximin(table, metric, params.radius, Math.floor(randomSource(params.seed)() * n))
-      : plainGreedy(table, metric, params.radius, params.landmarks === "random" ? shuffledOrder(n, randomSource(params.seed)) : Uint32Array.from({ length: n }, (_, i) => i));
+      : plainGreedy(table, metric, params.radius, params.landmarks === "greedy-shuffled" ? shuffledOrder(n, randomSource(params.seed)) : Uint32Array.from({ length: n }, (_, i) => i));
   const balls = landmarks.map((l) => plainBall(table, metric, l, params.radius));
   const parsedRow = (i: number): number => defined.usedRows[i]!;
   return { landmarks: landmarks.map(parsedRow), balls: balls.map((ball) => ball.map(parsedRow)), edges: plainEdges(balls) };
@@ -63,7 +63,7 @@ const built = (result: CoverResult) => ({
 const settings = fc.record({
   metric: fc.constantFrom<MetricName>("euclidean", "manhattan", "chebyshev", "cosine", "correlation"),
   scale: fc.constantFrom<ScaleName>("none", "zscore", "minmax", "robust"),
-  landmarks: fc.constantFrom("greedy" as const, "random" as const, "maximin" as const),
+  landmarks: fc.constantFrom("greedy-file-order" as const, "greedy-shuffled" as const, "maximin" as const),
   seed: fc.integer({ min: -1000, max: 1000 }),
   radius: fc.oneof(fc.constantFrom(0.25, 0.5, 1, 1.5, 2, 0.1 + 0.2), fc.double({ min: 0.01, max: 3, noNaN: true })),
 });
@@ -83,7 +83,7 @@ describe("buildCover with candidate indexes", () => {
   it("gives the plain pipeline's result on 3,000 rows of 8 clusters in 6 columns (deep tree; the index judges its own pruning)", () => {
     const parsed = clusters();
     for (const metric of ["euclidean", "manhattan", "chebyshev", "cosine", "correlation"] as const) {
-      for (const landmarks of ["greedy", "maximin"] as const) {
+      for (const landmarks of ["greedy-file-order", "maximin"] as const) {
         const radius = metric === "cosine" || metric === "correlation" ? 0.05 : metric === "manhattan" ? 1.5 : 0.6;
         const params: CoverParams = { features: parsed.columns.map((c) => c.name), scale: "zscore", metric, radius, landmarks, seed: 3 };
         expect(built(buildCover(parsed, params, { loops: false }))).toEqual(plainBuild(parsed, params));

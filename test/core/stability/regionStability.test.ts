@@ -7,7 +7,7 @@ import { pointsTable } from "../sweep/support.ts";
 // file order. For 1 ≤ r < 6 each cluster is one connected group of balls and no ball crosses the
 // gap (test/core/sweep/twoClusters.test.ts), so selecting A's rows matches A's balls exactly.
 const table = pointsTable(["x"], [...Array.from({ length: 10 }, (_, i) => [i]), ...Array.from({ length: 10 }, (_, i) => [15 + i])]);
-const params = { features: ["x"], scale: "none", metric: "euclidean", landmarks: "greedy", seed: 1 } as const;
+const params = { features: ["x"], scale: "none", metric: "euclidean", landmarks: "greedy-file-order", seed: 1 } as const;
 const clusterA = Array.from({ length: 10 }, (_, i) => i);
 
 describe("region stability across radii", () => {

@@ -23,7 +23,7 @@ export const gridTable: fc.Arbitrary<NumericTable> = fc
 export const gridRadius: fc.Arbitrary<number> = fc.integer({ min: 1, max: 8 }).map((k) => k / 2);
 
 /** Landmark rule of a build: file order, or an order shuffled by a seed. */
-export const landmarkRule: fc.Arbitrary<{ rule: "greedy" | "random"; seed: number }> = fc.record({
-  rule: fc.constantFrom("greedy" as const, "random" as const),
+export const landmarkRule: fc.Arbitrary<{ rule: "greedy-file-order" | "greedy-shuffled"; seed: number }> = fc.record({
+  rule: fc.constantFrom("greedy-file-order" as const, "greedy-shuffled" as const),
   seed: fc.integer({ min: -1000, max: 1000 }),
 });

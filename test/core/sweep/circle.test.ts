@@ -12,7 +12,7 @@ import { pointsTable } from "./support.ts";
 
 const chord = (m: number, n: number): number => 2 * Math.sin((Math.PI * m) / n); // isosceles triangle with apex angle 2πm/N
 const circle = (n: number) => pointsTable(["x", "y"], Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]));
-const params = { features: ["x", "y"], scale: "none", metric: "euclidean", landmarks: "greedy", seed: 1 } as const;
+const params = { features: ["x", "y"], scale: "none", metric: "euclidean", landmarks: "greedy-file-order", seed: 1 } as const;
 const radii = logSpacedRadii(0.05, 3, 24); // step ratio 60^(1/23) ≈ 1.195 < c(2)/c(1) = 2 cos(π/N) ≥ √3, so the interval holds a radius
 
 describe("evenly spaced points on a circle", () => {

@@ -21,7 +21,7 @@ const file = fc
 // Radii on the half grid (ties with the grid's distances) and off it; 1..6 of them, repeats allowed.
 const radii = fc.array(fc.oneof(fc.integer({ min: 1, max: 12 }).map((k) => k / 4), fc.double({ min: 0.05, max: 4, noNaN: true })), { minLength: 1, maxLength: 6 });
 const settings = fc.record({
-  landmarks: fc.constantFrom("greedy" as const, "random" as const, "maximin" as const),
+  landmarks: fc.constantFrom("greedy-file-order" as const, "greedy-shuffled" as const, "maximin" as const),
   metric: fc.constantFrom(...(metricNames as MetricName[])),
   scale: fc.constantFrom("zscore" as const, "none" as const, "robust" as const),
   seed: fc.integer({ min: -1000, max: 1000 }),

@@ -25,7 +25,7 @@ describe("two clusters with a gap g between them", () => {
         const diameter = a + b + g - 2;
         const below = us.map((u) => 1 + u * (g - 1) * 0.999); // in [1, g)
         const above = [diameter, 1.5 * diameter];
-        const { sweep } = sweepWithCovers(line(a, b, g), { ...params, landmarks: "greedy" }, { radii: [...below, ...above] });
+        const { sweep } = sweepWithCovers(line(a, b, g), { ...params, landmarks: "greedy-file-order" }, { radii: [...below, ...above] });
         sweep.figures.radius.forEach((r, k) => expect(sweep.figures.b0[k]).toBe(r < g ? 2 : 1)); // worked by hand, see above
       }),
       { numRuns: 60 },
@@ -34,7 +34,7 @@ describe("two clusters with a gap g between them", () => {
 
   it("every rule and seed: below g no component holds rows of both clusters; from the diameter on there is one node", () => {
     fc.assert(
-      fc.property(layout, fc.constantFrom("greedy" as const, "random" as const, "maximin" as const), fc.integer({ min: -50, max: 50 }), ({ a, b, g }, landmarks, seed) => {
+      fc.property(layout, fc.constantFrom("greedy-file-order" as const, "greedy-shuffled" as const, "maximin" as const), fc.integer({ min: -50, max: 50 }), ({ a, b, g }, landmarks, seed) => {
         const diameter = a + b + g - 2;
         const { sweep, covers } = sweepWithCovers(line(a, b, g), { ...params, landmarks, seed }, { radii: [0.5, 1, g - 0.5, diameter, 2 * diameter] });
         covers.forEach((cover, k) => {
@@ -50,8 +50,8 @@ describe("two clusters with a gap g between them", () => {
 
   it("between g and the diameter either may happen: A = 0..4, B = 6..10, r = g = 2 joins in file order but not in seed 3's order", () => {
     const table = line(5, 5, 2);
-    const fileOrder = buildCover(table, { ...params, landmarks: "greedy", radius: 2 });
-    const seeded = buildCover(table, { ...params, landmarks: "random", seed: 3, radius: 2 });
+    const fileOrder = buildCover(table, { ...params, landmarks: "greedy-file-order", radius: 2 });
+    const seeded = buildCover(table, { ...params, landmarks: "greedy-shuffled", seed: 3, radius: 2 });
     // file order: landmarks at x = 0, 3, 6, 9 (rows 0, 3, 5, 8); the ball of x = 6 holds x = 4, a row of A: joined
     expect([Array.from(fileOrder.landmarks), fileOrder.componentCount]).toEqual([[0, 3, 5, 8], 1]); // worked by hand
     // seed 3 visits x = 10 and 7 first (rows 9, 6), then 0 and 3: the balls of 3 and 7 both end at x = 5, where no row lies
