@@ -2,7 +2,8 @@
  * Benjamini–Hochberg adjusted p-values (false discovery rate), step-up:
  *   with the m present p-values in ascending order p_(1) ≤ … ≤ p_(m),
  *   adjusted p_(i) = min_{k ≥ i} min(1, m · p_(k) / k),
- * i.e. a running minimum from the largest rank down, capped at 1. Rejecting every hypothesis whose
+ * i.e. a running minimum from the largest rank down, capped at 1 (the cap never binds: the largest
+ * rank contributes p_(m) itself). Rejecting every hypothesis whose
  * adjusted p is ≤ q is the step-up procedure at level q. Same values as R's p.adjust(p, "BH").
  * Source: Y. Benjamini and Y. Hochberg, J. R. Stat. Soc. B 57(1):289–300, 1995, §3.
  * O(m log m) for the sort.

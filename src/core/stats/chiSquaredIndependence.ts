@@ -22,7 +22,7 @@ export interface ChiSquaredIndependence {
  * Variant: no continuity (Yates) correction, also for 2×2 tables. Rows and columns whose total is 0
  * are dropped before anything else (they have no expected count and carry no information), and
  * r, c count what is left. The flag for an expected count below 5 follows the usual rule of thumb
- * (W. G. Cochran, Biometrics 10:417–451, 1954, §5, which is more lenient; Shoal flags any cell).
+ * (W. G. Cochran, Biometrics 10:417–451, 1954, is more lenient; Shoal flags any cell).
  * Source: K. Pearson, Phil. Mag. 5th ser. 50:157–175, 1900, with R. A. Fisher's degrees of
  * freedom, J. R. Stat. Soc. 85:87–94, 1922. O(r·c).
  * Degenerate input: fewer than 2 rows or columns with a non-zero total give statistic and p NaN and

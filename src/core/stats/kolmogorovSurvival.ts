@@ -6,7 +6,8 @@
  * above. Each sum stops when a term no longer changes it (at most a handful of terms either way).
  * Source: A. N. Kolmogorov, Giorn. Ist. Ital. Attuari 4:83–91, 1933; the two forms and the switch at
  * 1.18 as in W. H. Press et al., Numerical Recipes, 3rd ed., 2007, §6.14 (the KSdist functions).
- * O(1). Degenerate input: λ ≤ 0 gives 1; +∞ gives 0; NaN gives NaN.
+ * O(1). Degenerate input: λ ≤ 0 gives 1; +∞ gives 0; NaN gives NaN. Beyond λ ≈ 19.3 the value
+ * (below 5e-324) underflows to 0.
  * @example kolmogorovSurvival(1) // => 0.26999967167735456
  */
 export function kolmogorovSurvival(lambda: number): number {
