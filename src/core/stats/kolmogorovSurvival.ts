@@ -21,7 +21,8 @@ export function kolmogorovSurvival(lambda: number): number {
       if (sum + term === sum) break;
       sum += term;
     }
-    return 1 - (Math.sqrt(2 * Math.PI) / lambda) * sum;
+    // Below λ ≈ 0.04 every term underflows to 0, and below λ ≈ 2.5e-308 √(2π)/λ overflows too (∞ · 0 = NaN): P is 0.
+    return sum === 0 ? 1 : 1 - (Math.sqrt(2 * Math.PI) / lambda) * sum;
   }
   let sum = 0;
   for (let k = 1; k <= 20; ++k) {
