@@ -1,7 +1,7 @@
 /**
  * Benjamini–Hochberg adjusted p-values (false discovery rate), step-up:
  *   with the m present p-values in ascending order p_(1) ≤ … ≤ p_(m),
- *   adjusted p_(i) = min_{k ≥ i} min(1, m · p_(k) / k),
+ *   adjusted p_(i) = min_{k ≥ i} min(1, (m / k) · p_(k)),
  * i.e. a running minimum from the largest rank down, capped at 1 (the cap never binds: the largest
  * rank contributes p_(m) itself). Rejecting every hypothesis whose
  * adjusted p is ≤ q is the step-up procedure at level q. Same values as R's p.adjust(p, "BH").
@@ -27,7 +27,8 @@ export function benjaminiHochberg(pValues: ArrayLike<number>): Float64Array {
   let running = 1;
   for (let rank = m; rank >= 1; --rank) {
     const k = order[rank - 1]!;
-    running = Math.min(running, (m * pValues[k]!) / rank);
+    // m / rank ≥ 1 rounds to at least 1, so the product never rounds below the raw p (m · p / rank can).
+    running = Math.min(running, (m / rank) * pValues[k]!);
     adjusted[k] = running;
   }
   return adjusted;
