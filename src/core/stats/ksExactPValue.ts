@@ -14,7 +14,8 @@
  * touch the boundary instead of 1 − the paths that avoid it, so a small p keeps its relative accuracy.
  * Ties: the count assumes no ties. With ties D can only be read at the ends of tied runs, so the
  * exact p given the ties is at most this one: the value is conservative.
- * O(m·n) time, O(min(m, n)) memory.
+ * O(m·n) time, O(min(m, n)) memory. A p below about 1e-300 (possible only when C(m + n, m) > 1e300,
+ * far beyond the m·n ≤ 10,000 where ksPValue uses this) underflows and loses digits.
  * Degenerate input: d ≤ 0 gives 1; d > 1 gives 0; NaN gives NaN; m or n not a positive integer throws.
  * @example ksExactPValue(0.5, 3, 2) // => 0.9 (1 of the 10 orderings of 3 and 2 values has D < 1/2)
  */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { ksExactPValue } from "../../../src/core/stats/ksExactPValue.ts";
+import { ksStatistic } from "../../../src/core/stats/ksStatistic.ts";
 import { assertClose } from "../../assertClose.ts";
 
 // Fully independent check: enumerate all C(m + n, m) orderings as bit masks (bit set: a value of x),
@@ -81,6 +82,23 @@ describe("ksExactPValue", () => {
 
   it("a d between lattice values counts like the next lattice value up: 0.55 for m = n = 10 equals 0.6", () => {
     expect(ksExactPValue(0.55, 10, 10)).toBe(ksExactPValue(0.6, 10, 10)); // worked by hand: gaps are multiples of 1/10
+  });
+
+  it("with ties the p given the ties (all 70 splits of 1, 1, 2, 2, 2, 3, 4, 4 into 4 + 4) never exceeds the no-ties p: conservative", () => {
+    const pooled = [1, 1, 2, 2, 2, 3, 4, 4];
+    const statistics: number[] = [];
+    for (let mask = 0; mask < 1 << 8; ++mask) {
+      const x = pooled.filter((_, b) => (mask >> b) & 1);
+      if (x.length === 4) statistics.push(ksStatistic(x, pooled.filter((_, b) => !((mask >> b) & 1))));
+    }
+    expect(statistics.length).toBe(70); // C(8, 4)
+    let strictlyBelow = 0;
+    for (const d of statistics) {
+      const givenTies = statistics.filter((other) => other >= d).length / statistics.length; // brute-force permutation p with the ties kept
+      expect(givenTies).toBeLessThanOrEqual(ksExactPValue(d, 4, 4) + 1e-15);
+      if (givenTies < ksExactPValue(d, 4, 4) - 1e-15) strictlyBelow++;
+    }
+    expect(strictlyBelow).toBeGreaterThan(0);
   });
 
   it("d ≤ 0 gives 1, d > 1 gives 0, NaN gives NaN", () => {
