@@ -3,8 +3,8 @@
  *   with the m present p-values in ascending order p_(1) ≤ … ≤ p_(m),
  *   adjusted p_(i) = min_{k ≥ i} min(1, (m / k) · p_(k)),
  * i.e. a running minimum from the largest rank down, capped at 1 (the cap never binds: the largest
- * rank contributes p_(m) itself). Rejecting every hypothesis whose
- * adjusted p is ≤ q is the step-up procedure at level q. Same values as R's p.adjust(p, "BH").
+ * rank contributes p_(m) itself). Rejecting every hypothesis whose adjusted p is ≤ q is the step-up
+ * procedure at level q. Same formula, in the same order of operations, as R's p.adjust(p, "BH").
  * Source: Y. Benjamini and Y. Hochberg, J. R. Stat. Soc. B 57(1):289–300, 1995, §3.
  * O(m log m) for the sort.
  * Ties: equal p-values get equal adjusted values whatever their order (the running minimum reaches

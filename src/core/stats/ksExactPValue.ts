@@ -4,8 +4,8 @@
  * Formula: the C(m + n, m) orderings of the pooled sample are equally likely; an ordering is a path
  * from (0, 0) to (m, n) stepping i → i + 1 for a value of x and j → j + 1 for a value of y, and
  * D ≥ d exactly when the path touches a point with |i·n − j·m| ≥ q, q = ⌈d·m·n − 1e-7⌉. The
- * comparison is in integers; the 1e-7 only absorbs the rounding of d·m·n (d from ksStatistic is an
- * integer over m·n, and m·n stays far below 1e7 where this is used), as R does.
+ * comparison is in integers; the 1e-7 (R's) only absorbs the rounding of d·m·n: d from ksStatistic is
+ * an integer over m·n, so d·m·n is off by a few ulps, far less than 1e-7 while m·n < 1e8.
  *   p = hits(m, n) / C(m + n, m), where hits(i, j) = C(i + j, i) on a touching point and
  *   hits(i − 1, j) + hits(i, j − 1) elsewhere (the paths into (i, j) that have touched).
  * Source: the lattice-path recursion of J. L. Hodges Jr., Ark. Mat. 3:469–486, 1958, in the
