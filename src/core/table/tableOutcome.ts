@@ -41,7 +41,7 @@ export function tableOutcome(sink: RecordSink, format: TableFormat, ragged: Ragg
     if (finished.reformatted) notices.push({ code: "texts-reformatted", message: `column ${finished.column.name} became text after many numbers: its numbers are shown in shortest form` });
   }
   notices.push(...tableNotices(sink.rows, reports, format));
-  return { table: { rows: sink.rows, columns }, report: { format, rows: sink.rows, lines: sink.line - 1, columns: reports, notices } };
+  return { table: { rows: sink.rows, columns }, report: { format, rows: sink.rows, lines: sink.line - 1, emptyLines: sink.emptyLines, columns: reports, notices } };
 }
 
 /** Notices about the table as a whole, shared with the Parquet reader. */

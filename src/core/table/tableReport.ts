@@ -55,6 +55,11 @@ export interface TableReport {
   readonly rows: number;
   /** Lines of text read, blank lines and quoted line breaks included; null for Parquet. */
   readonly lines: number | null;
+  /**
+   * Wholly empty lines that were not records (before the header, or anywhere in a file of several
+   * columns); absent for Parquet. In a one-column file an empty line is a record with a missing value.
+   */
+  readonly emptyLines?: number;
   readonly columns: readonly ColumnReport[];
   readonly notices: readonly Notice[];
 }
