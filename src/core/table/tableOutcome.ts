@@ -48,6 +48,11 @@ export function tableOutcome(sink: RecordSink, format: TableFormat, ragged: Ragg
 export function tableNotices(rows: number, reports: readonly ColumnReport[], format: TableFormat): Notice[] {
   const notices: Notice[] = [];
   if (rows === 1) notices.push({ code: "one-row", message: "the table has one data record: it can be shown, but scaling and a graph need at least two" });
+  const rowNumbers = reports.filter((r) => r.looksLikeRowNumber).map((r) => r.name);
+  if (rowNumbers.length > 0) {
+    const which = rowNumbers.length === 1 ? `column ${rowNumbers[0]} looks` : `columns ${rowNumbers.join(", ")} look`;
+    notices.push({ code: "row-number-column", message: `${which} like a row number or numeric id (distinct whole numbers): suggested role "row label", not a feature` });
+  }
   if (!reports.some((r) => r.type === "numeric")) {
     const read = format.kind === "delimited" ? ` (read with delimiter ${JSON.stringify(format.delimiter)} and decimal mark ${JSON.stringify(format.decimal)})` : "";
     notices.push({ code: "no-numeric-column", message: `no numeric column among ${reports.map((r) => r.name).join(", ")}${read}` });
