@@ -26,6 +26,10 @@ export function tableOutcome(sink: RecordSink, format: TableFormat, ragged: Ragg
     if (ragged === "reject") throw new Error(`ragged records: the header has ${width} fields but ${shown}${more} ${lines}`);
     notices.push({ code: "ragged-records", message: `padded short records with empty cells and cut long ones to the header's ${width} fields: ${shown}${more} ${lines}` });
   }
+  if (sink.emptyLines > 0) {
+    const lines = `${sink.emptyLines} wholly empty line${sink.emptyLines === 1 ? "" : "s"}`;
+    notices.push({ code: "empty-lines", message: `skipped ${lines}: not records, so record k is on spreadsheet row k + 1 plus the empty lines above it` });
+  }
   const named = uniqueNames(header);
   notices.push(...named.notices);
   if (sink.malformedCount > 0) {

@@ -42,7 +42,7 @@ export interface ColumnReport {
   readonly looksLikeRowNumber: boolean;
 }
 
-export type NoticeCode = "renamed-column" | "ragged-records" | "one-row" | "no-numeric-column" | "malformed-quotes" | "texts-reformatted" | "skipped-column" | "large-integers" | "row-number-column";
+export type NoticeCode = "renamed-column" | "ragged-records" | "one-row" | "no-numeric-column" | "malformed-quotes" | "texts-reformatted" | "skipped-column" | "large-integers" | "row-number-column" | "empty-lines";
 
 /** Something the reader changed or wants the user to know; the message is lowercase and names the values. */
 export interface Notice {

@@ -37,6 +37,7 @@ describe("empty lines: a record in a one-column file, not a record in a wider on
     assertClose(table.columns[0]!.numbers, [1, 3]);
     expect(report.emptyLines).toBe(1); // worked by hand: line 3
     expect(report.lines).toBe(4); // worked by hand
+    expect(report.notices.find((n) => n.code === "empty-lines")?.message).toBe("skipped 1 wholly empty line: not records, so record k is on spreadsheet row k + 1 plus the empty lines above it");
   });
 
   it("empty lines before the header are counted and skipped (2 lines, in one column too)", () => {
