@@ -19,8 +19,9 @@ export const commonUsage = `  --columns a,b,c     feature columns (default: ever
   --outcome a,b       outcome columns (never features)
   --scale S           none | zscore | minmax | robust (default zscore)
   --metric M          euclidean | manhattan | chebyshev | cosine | correlation (default euclidean)
-  --landmarks L       greedy (file order) | random (seeded order) | maximin (default greedy)
-  --seed N            integer seed for random and maximin (default 1)
+  --landmarks L       greedy-file-order | greedy-shuffled (seeded order) | maximin (default greedy-file-order;
+                      the earlier names greedy and random still work)
+  --seed N            integer seed for greedy-shuffled and maximin (default 1)
   --missing P         drop | median | mean: rows with a missing feature value (default drop)
   --weights a=2,b=0.5 factor per feature after scaling (default 1); for a one-hot column, the indicator's value
   --one-hot a,b       categorical columns used as features, one 0/1 column per level (not scaled)`;
@@ -58,13 +59,30 @@ export function readCommonOptions(values: { readonly [K in keyof typeof commonOp
   };
 }
 
-/** The feature columns for a parsed table: the named ones (each must exist), else every numeric column but the id and outcomes. */
+/**
+ * The feature columns for a parsed table: the named ones, else every numeric column but the id and
+ * outcomes. Throws for a named column that does not exist, for a feature (numeric or one-hot) that
+ * is also the --id or an --outcome column, and for a --weights name that is not a feature.
+ */
 export function resolveFeatures(table: ParsedTable, options: CommonOptions): string[] {
-  for (const name of [...(options.columns ?? []), ...options.outcomes, ...(options.idColumn ? [options.idColumn] : [])]) {
+  const oneHot = options.params.oneHot ?? [];
+  for (const name of [...(options.columns ?? []), ...oneHot, ...options.outcomes, ...(options.idColumn ? [options.idColumn] : [])]) {
     if (!table.columns.some((c) => c.name === name)) throw new Error(`unknown column: ${name}`);
   }
-  if (options.columns) return [...options.columns];
-  return table.columns.filter((c) => c.kind === "numeric" && c.name !== options.idColumn && !options.outcomes.includes(c.name)).map((c) => c.name);
+  const features = options.columns
+    ? [...options.columns]
+    : table.columns.filter((c) => c.kind === "numeric" && c.name !== options.idColumn && !options.outcomes.includes(c.name)).map((c) => c.name);
+  for (const [flag, names] of [["--columns", options.columns ?? []], ["--one-hot", oneHot]] as const) {
+    for (const name of names) {
+      if (name === options.idColumn) throw new Error(`${flag} includes the --id column: ${name}`);
+      if (options.outcomes.includes(name)) throw new Error(`${flag} includes an --outcome column: ${name}`);
+    }
+  }
+  for (const name of Object.keys(options.params.weights ?? {})) {
+    if (!table.columns.some((c) => c.name === name)) throw new Error(`unknown column in --weights: ${name}`);
+    if (!features.includes(name) && !oneHot.includes(name)) throw new Error(`--weights names a column that is not a feature: ${name}`);
+  }
+  return features;
 }
 
 function parseWeights(pairs: readonly string[]): Record<string, number> {

@@ -1,12 +1,28 @@
+import { readFileSync } from "node:fs";
 import { buildUsage, parseBuildArgs } from "./parseBuildArgs.ts";
 import { runBuild } from "./runBuild.ts";
 import { parseSweepArgs, sweepUsage } from "./parseSweepArgs.ts";
 import { runSweep } from "./runSweep.ts";
 
+const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage };
+const topUsage = `shoal build DATA --out DIR [options]   one cover graph: nodes.csv, members.csv, edges.csv, summary.json
+shoal sweep DATA [--out FILE] [options] the graph's figures at many radii, one CSV line per radius
+shoal help [build | sweep]              the options of a command (also: shoal build --help)
+shoal --version                         the version`;
+
+/** The version in package.json. */
+export function version(): string {
+  return (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
+}
+
 /** Entry of the headless command; returns the exit code. Errors are one line on stderr. */
 export async function main(args: readonly string[]): Promise<number> {
   const [command, ...rest] = args;
   try {
+    if (command !== undefined && command in usages && (rest.includes("--help") || rest.includes("-h"))) {
+      console.log(usages[command]);
+      return 0;
+    }
     switch (command) {
       case "build":
         console.log(await runBuild(parseBuildArgs(rest)));
@@ -14,11 +30,20 @@ export async function main(args: readonly string[]): Promise<number> {
       case "sweep":
         process.stdout.write(await runSweep(parseSweepArgs(rest)));
         return 0;
+      case "--version":
+      case "-v":
+      case "version":
+        console.log(`shoal ${version()}`);
+        return 0;
       case undefined:
       case "help":
       case "--help":
-        console.log(`${buildUsage}\n\n${sweepUsage}`);
+      case "-h": {
+        const topic = command === "help" ? rest[0] : undefined;
+        if (topic !== undefined && !(topic in usages)) throw new Error(`unknown command: ${topic}`);
+        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}` : usages[topic]);
         return command === undefined ? 2 : 0;
+      }
       default:
         throw new Error(`unknown command: ${command}`);
     }

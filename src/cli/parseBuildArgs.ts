@@ -11,8 +11,10 @@ export interface BuildCommand extends CommonOptions {
   readonly read: ByteReadOptions;
 }
 
-export const buildUsage = `usage: shoal build DATA.csv --out DIR [options]
-  --out DIR           folder for nodes.csv, members.csv, edges.csv and summary.json
+export const buildUsage = `usage: shoal build DATA --out DIR [options]
+  DATA                a delimited text file (CSV, TSV, ; or | separated) or a Parquet file
+  --out DIR           folder for nodes.csv, members.csv, edges.csv and summary.json; replaces the
+                      set Shoal wrote there before (listed in DIR/.shoal-files), leaves other files
   --radius R          ball radius (default: the workbench's default-radius rule)
 ${commonUsage}
 ${readUsage}`;

@@ -14,7 +14,8 @@ export interface SweepCommand extends CommonOptions {
   readonly read: ByteReadOptions;
 }
 
-export const sweepUsage = `usage: shoal sweep DATA.csv [--out FILE] [options]
+export const sweepUsage = `usage: shoal sweep DATA [--out FILE] [options]
+  DATA                a delimited text file (CSV, TSV, ; or | separated) or a Parquet file
   --out FILE          write the per-radius table there (default: standard output)
   --radius-min A      smallest radius (default: from the data, see the README)
   --radius-max B      largest radius (default: from the data)

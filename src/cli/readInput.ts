@@ -17,7 +17,7 @@ export const readOptionSpec = {
   ragged: { type: "string" },
 } as const;
 
-export const readUsage = `  --delimiter D       , | ; | tab | pipe (default: detected)
+export const readUsage = `  --delimiter D       comma | semicolon | tab | pipe, or the character , or ; (default: detected)
   --decimal M         . | , (default: detected)
   --encoding E        utf-8 | windows-1252 (default: detected)
   --ragged P          reject | pad: records with too few or too many fields (default reject)`;

@@ -4,7 +4,7 @@ import { resolveFeatures } from "./commonOptions.ts";
 import type { SweepCommand } from "./parseSweepArgs.ts";
 import { readInput } from "./readInput.ts";
 
-export const sweepColumns = ["radius", "nodes", "edges", "b0", "b1", "cycle_rank", "balls_per_row", "largest_node_share", "largest_component_share", "plateau", "suggested"];
+export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1", "cycle_rank", "balls_per_row", "largest_node_share", "largest_component_share", "plateau", "plateau_middle"];
 
 /**
  * Runs a radius sweep over the table and returns the text for standard output: the per-radius
@@ -34,14 +34,19 @@ export async function runSweep(command: SweepCommand): Promise<string> {
   return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${suggested}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;
 }
 
-/** The per-radius table: one line per radius, ascending; `plateau` numbers the runs of unchanged b0, b1 from 1; `suggested` is 1 on the suggested radius. */
+/**
+ * The per-radius table: one line per radius, ascending. `components` counts the connected
+ * components of the graph, which is b0 of its nerve: both columns are kept, so a reader of either
+ * name finds it. `plateau` numbers the runs of unchanged b0, b1 from 1 (0 outside a run);
+ * `plateau_middle` is 1 on the suggested radius, the middle of the widest eligible plateau.
+ */
 export function sweepCsv(sweep: RadiusSweep): string {
   const f = sweep.figures;
   const plateauOf = new Uint32Array(f.radius.length);
   sweep.plateaus.forEach((p, j) => plateauOf.fill(j + 1, p.first, p.last + 1));
   let out = csvLine(sweepColumns);
   for (let k = 0; k < f.radius.length; ++k) {
-    const row = [f.radius[k]!, f.nodes[k]!, f.edges[k]!, f.b0[k]!, f.b1[k]!, f.cycleRank[k]!, f.ballsPerRow[k]!, f.largestNodeShare[k]!, f.largestComponentShare[k]!, plateauOf[k]!, sweep.suggestion?.index === k ? 1 : 0];
+    const row = [f.radius[k]!, f.nodes[k]!, f.edges[k]!, f.b0[k]!, f.b0[k]!, f.b1[k]!, f.cycleRank[k]!, f.ballsPerRow[k]!, f.largestNodeShare[k]!, f.largestComponentShare[k]!, plateauOf[k]!, sweep.suggestion?.index === k ? 1 : 0];
     out += csvLine(row.map(csvNumber));
   }
   return out;

@@ -4,6 +4,8 @@ export { readTableText } from "./table/readTableText.ts";
 export { readTableBytes, readChunkBytes, type ByteSource, type ByteReadOptions, type ByteReadControl, type Utf8Decoder } from "./table/readTableBytes.ts";
 export {
   delimiters,
+  delimiterNames,
+  delimiterLabels,
   maxInputBytes,
   distinctCap,
   numericShare,
@@ -11,6 +13,7 @@ export {
   maybeDecimalMark,
   maybeRaggedPolicy,
   type Delimiter,
+  type DelimiterName,
   type DecimalMark,
   type RaggedPolicy,
   type ReadOptions,
@@ -70,7 +73,7 @@ export { sampleVariance } from "./stats/sampleVariance.ts";
 export { quantileSorted } from "./stats/quantileSorted.ts";
 export { columnSummary, type ColumnSummary } from "./stats/columnSummary.ts";
 export { standardisedDifference } from "./stats/standardisedDifference.ts";
-export { coverExports, exportSchemaVersion, type CoverExports, type ExportContext } from "./export/coverExports.ts";
+export { coverExports, exportSchemaVersion, type CoverExports, type ExportContext, type ReadingRecord } from "./export/coverExports.ts";
 export { zipExports } from "./export/zipExports.ts";
 export { csvNumber, csvText, csvLine } from "./export/csvCell.ts";
 export { randomSource, shuffledOrder } from "./random.ts";

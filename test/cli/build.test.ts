@@ -14,7 +14,7 @@ import { demoPath, runShoal, uiExport, type Run } from "./runShoal.ts";
 const scratch = mkdtempSync(join(tmpdir(), "shoal-cli-test-"));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
 
-const outputNames = ["edges.csv", "members.csv", "nodes.csv", "summary.json"];
+const outputNames = [".shoal-files", "edges.csv", "members.csv", "nodes.csv", "summary.json"];
 const roles = { idColumn: "pump_id", outcomes: ["failed_within_90d", "downtime_h"] } as const;
 const roleArgs = ["--id", "pump_id", "--outcome", "failed_within_90d,downtime_h"];
 // The header of public/demo/pump-fleet.csv without pump_id, district and family (text) and the two outcomes.
@@ -136,6 +136,14 @@ describe.concurrent("shoal build errors: one line on stderr, exit code 2, nothin
     await fails("text-column", (out) => [demoPath, "--out", out, "--columns", "age_years,district"], "not a numeric column: district");
   });
 
+  it("an unknown name in --weights: \"shoal: unknown column in --weights: nope\" (it was once ignored)", async () => {
+    await fails("weights-unknown", (out) => [demoPath, "--out", out, "--weights", "flow_m3h=2,nope=3", "--radius", "0.5"], "unknown column in --weights: nope");
+  });
+
+  it("--columns naming the --id column: \"shoal: --columns includes the --id column: pump_id\"", async () => {
+    await fails("columns-id", (out) => [demoPath, "--out", out, "--id", "pump_id", "--columns", "age_years,pump_id", "--radius", "0.5"], "--columns includes the --id column: pump_id");
+  });
+
   it("--radius 0: \"shoal: invalid radius: 0\"", async () => {
     await fails("radius-zero", (out) => [demoPath, "--out", out, "--radius", "0"], "invalid radius: 0");
   });
@@ -160,4 +168,19 @@ describe.concurrent("shoal build errors: one line on stderr, exit code 2, nothin
     expect(() => parseCsvText(text)).toThrow("ragged records: the header has 2 fields but row 2 has 1 fields, row 3 has 3 fields"); // the core parser's message, in process
     await fails("ragged", (out) => [ragged, "--out", out, "--radius", "1"], "ragged records: the header has 2 fields but row 2 has 1 fields, row 3 has 3 fields (lines 3, 4)", { existingOut: true });
   });
+});
+
+describe("shoal build replaces its own files in --out as a set", () => {
+  it("a user's file survives, a stale Shoal file listed in .shoal-files is removed, and the new set is complete", async () => {
+    const out = join(scratch, "reused");
+    mkdirSync(out);
+    writeFileSync(join(out, "notes.txt"), "mine");
+    writeFileSync(join(out, "regions.csv"), "from an earlier run with other options");
+    writeFileSync(join(out, ".shoal-files"), "nodes.csv\nregions.csv\n");
+    const run = await runShoal(["build", demoPath, "--out", out, ...roleArgs, "--radius", "0.5"]);
+    expect(run.code).toBe(0);
+    expect(readdirSync(out).sort()).toEqual([...outputNames, "notes.txt"].sort());
+    expect(readFileSync(join(out, "notes.txt"), "utf8")).toBe("mine");
+    expect(readFileSync(join(out, ".shoal-files"), "utf8").split("\n").slice(1)).toEqual(["nodes.csv", "members.csv", "edges.csv", "summary.json", ""]);
+  }, 30_000);
 });

@@ -1,9 +1,8 @@
-import { mkdtemp, readdir, writeFile } from "node:fs/promises";
+import { mkdtemp, readdir } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { parseBuildArgs } from "../../src/cli/parseBuildArgs.ts";
-import { writeAll } from "../../src/cli/runBuild.ts";
 
 // In-process checks of the command line (no process spawn): every bad argument is one clear line.
 describe("parseBuildArgs", () => {
@@ -29,23 +28,6 @@ describe("parseBuildArgs", () => {
 
   it("weights parse to numbers by column: a=2,b=0.5", () => {
     expect(parseBuildArgs([...base, "--weights", "a=2,b=0.5"]).params.weights).toEqual({ a: 2, b: 0.5 });
-  });
-});
-
-describe("writeAll", () => {
-  it("an output path that is a file is refused, and no staging folder is left behind", async () => {
-    const folder = await mkdtemp(join(tmpdir(), "shoal-write-"));
-    const file = join(folder, "taken");
-    await writeFile(file, "x");
-    await expect(writeAll(file, { "a.csv": "1\n" })).rejects.toThrow(`output path is not a folder: ${file}`);
-    expect(await readdir(folder)).toEqual(["taken"]);
-  });
-
-  it("writes every file into a new folder and leaves no staging folder", async () => {
-    const folder = await mkdtemp(join(tmpdir(), "shoal-write-"));
-    await writeAll(join(folder, "out"), { "a.csv": "1\n", "b.json": "{}\n" });
-    expect((await readdir(join(folder, "out"))).sort()).toEqual(["a.csv", "b.json"]);
-    expect(await readdir(folder)).toEqual(["out"]);
   });
 });
 

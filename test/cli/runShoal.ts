@@ -33,11 +33,12 @@ export interface UiExport {
 /**
  * What the workbench exports for a file (src/state/actions.ts, exportCover): the text through
  * parseCsvText, buildCover with the store's parameters, then coverExports with the file's base
- * name and byte size and the id and outcome roles.
+ * name and byte size, the id and outcome roles, and how the file was read (comma-separated, decimal
+ * point, ragged rows rejected: the demo's format and the reader's default).
  */
 export function uiExport(path: string, params: CoverParams, roles: { idColumn: string | null; outcomes: readonly string[] }): UiExport {
   const parsed = parseCsvText(readFileSync(path, "utf8"));
   const result = buildCover(parsed, params);
-  const files = coverExports(parsed, result, { fileName: basename(path), fileSize: statSync(path).size, idColumn: roles.idColumn, outcomes: roles.outcomes });
+  const files = coverExports(parsed, result, { fileName: basename(path), fileSize: statSync(path).size, idColumn: roles.idColumn, outcomes: roles.outcomes, reading: { format: "delimited", delimiter: "comma", decimal: ".", ragged: "reject" } });
   return { parsed, result, files };
 }

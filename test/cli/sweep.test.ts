@@ -25,7 +25,7 @@ function shoal(args: readonly string[]): Promise<{ code: number; stdout: string;
   });
 }
 
-const header = "radius,nodes,edges,b0,b1,cycle_rank,balls_per_row,largest_node_share,largest_component_share,plateau,suggested";
+const header = "radius,nodes,edges,components,b0,b1,cycle_rank,balls_per_row,largest_node_share,largest_component_share,plateau,plateau_middle";
 const demoArgs = ["--id", "pump_id", "--outcome", "failed_within_90d,downtime_h", "--radius-min", "0.3", "--radius-max", "3", "--steps", "4"];
 
 describe("shoal sweep as a process", () => {

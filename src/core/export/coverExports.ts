@@ -1,10 +1,20 @@
 import type { CoverResult } from "../cover/buildCover.ts";
 import { nodeMeans } from "../cover/nodeMeans.ts";
+import { cellText } from "../table/cellText.ts";
+import type { DecimalMark, DelimiterName, RaggedPolicy } from "../table/readOptions.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { csvLine, csvNumber, csvText } from "./csvCell.ts";
+import { csvLine, csvNumber, csvQuoted, csvText } from "./csvCell.ts";
 
-/** Version of the export layout below; bump it when a file's columns or meaning change. */
-export const exportSchemaVersion = 1;
+/**
+ * Version of the export layout below; bump it when a file's columns or meaning change.
+ * 2: summary.json gains `input.reading`; a numeric row label is written as read (`007`).
+ */
+export const exportSchemaVersion = 2;
+
+/** How the input was read, under the names the headless command takes (`--delimiter pipe`, `--ragged pad`). */
+export type ReadingRecord =
+  | { readonly format: "delimited"; readonly delimiter: DelimiterName; readonly decimal: DecimalMark; readonly ragged: RaggedPolicy }
+  | { readonly format: "parquet" };
 
 export interface ExportContext {
   readonly fileName: string;
@@ -13,6 +23,8 @@ export interface ExportContext {
   readonly idColumn: string | null;
   /** Outcome columns whose node means follow the features' in nodes.csv. */
   readonly outcomes: readonly string[];
+  /** How the file was read; written as `input.reading` in summary.json (null when absent). */
+  readonly reading?: ReadingRecord;
 }
 
 export interface CoverExports {
@@ -23,7 +35,7 @@ export interface CoverExports {
 }
 
 /**
- * The export tables (schema version 1; documented in the README). Nodes are numbered from 1
+ * The export tables (schema version 2; documented in the README, whose key list a test compares with this). Nodes are numbered from 1
  * in the order their landmarks were chosen; `row` and `landmark_row` are 1-based data-record
  * numbers of the input file, counting every record including those left out.
  */
@@ -54,7 +66,7 @@ export function coverExports(parsed: ParsedTable, result: CoverResult, context: 
   const summary = {
     schema: "shoal-cover-export",
     schemaVersion: exportSchemaVersion,
-    input: { fileName: context.fileName, fileSize: context.fileSize },
+    input: { fileName: context.fileName, fileSize: context.fileSize, reading: context.reading ?? null },
     params: {
       ...result.params,
       missing: result.params.missing ?? "drop",
@@ -95,10 +107,10 @@ function columnNumbers(parsed: ParsedTable, name: string): Float64Array {
   return column.numbers;
 }
 
-// A numeric id is written as a number (never neutralised, so -5 stays -5); a text id as safe text.
+// A numeric id is written as read (007 stays 007, digits past 2^53 are kept) and never neutralised, so -5 stays -5; a text id as safe text.
 function idCells(parsed: ParsedTable, name: string): (row: number) => string {
   const column = parsed.columns.find((c) => c.name === name);
   if (!column) throw new Error(`unknown column: ${name}`);
   const texts = column.texts;
-  return texts ? (row) => csvText(texts[row]!) : (row) => csvNumber(column.numbers[row]!);
+  return texts ? (row) => csvText(texts[row]!) : (row) => csvQuoted(cellText(column, row));
 }

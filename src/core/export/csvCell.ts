@@ -11,8 +11,12 @@ export function csvNumber(value: number): string {
 }
 
 export function csvText(value: string): string {
-  const safe = /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\r\n]/.test(safe) ? `"${safe.replaceAll('"', '""')}"` : safe;
+  return csvQuoted(/^[=+\-@\t\r]/.test(value) ? `'${value}` : value);
+}
+
+/** A cell quoted only when it must be (a delimiter, quote or line break), never prefixed: for a number's text as read, such as `-007` or `1,5`. */
+export function csvQuoted(value: string): string {
+  return /[",\r\n]/.test(value) ? `"${value.replaceAll('"', '""')}"` : value;
 }
 
 export function csvLine(cells: readonly string[]): string {

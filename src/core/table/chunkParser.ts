@@ -19,7 +19,9 @@ interface PapaError {
  * RFC 4180 records from text arriving in chunks (line ends already "\n"), through papaparse's
  * low-level Parser exactly as its own ChunkStreamer uses it: each chunk is parsed after the
  * carried partial record with `ignoreLastRow`, and the text after the last complete record
- * (`meta.cursor`) is carried to the next chunk. A record longer than `maxRecordLength` is an
+ * (`meta.cursor`) is carried to the next chunk. An empty line is passed on as a record of one
+ * empty field (the sink decides what it means); the empty "record" papaparse reports after a
+ * final line break is not. A record longer than `maxRecordLength` is an
  * error, since it means an unclosed quote or a file without line breaks.
  * O(text length) plus one re-parse of each record cut by a chunk boundary.
  */
@@ -29,6 +31,9 @@ export function chunkParser(delimiter: Delimiter, sink: TakeRecords, nextLine: (
   const run = (text: string, last: boolean): void => {
     const parsed = parser.parse(text, 0, !last) as { data: string[][]; errors: PapaError[]; meta: { cursor: number } };
     const records = parsed.data;
+    // At the end, papaparse returns one empty record after a final line break: there is no line there.
+    const tail = records[records.length - 1];
+    if (last && (text === "" || text.endsWith("\n")) && tail?.length === 1 && tail[0] === "") records.pop();
     const unclosed = last ? parsed.errors.find((e) => e.code === "MissingQuotes") : undefined;
     if (unclosed) {
       sink(records.slice(0, unclosed.row ?? 0), [], true);

@@ -15,6 +15,9 @@ export const emptyCode = 0xffffffff;
  *   costs 8 bytes a row; a "list" column turns "sparse" when it comes to look numeric
  *   (checked every 4,096 rows);
  * - "numbers" (no text at all) for Parquet number columns.
+ * In "sparse" form an integer written otherwise than in its shortest form (`007`, `+5`, or more
+ * than 15 digits, such as an id past 2^53) is kept too, so a numeric id can be written back
+ * exactly as read (`originalTexts` in `finishColumn`).
  */
 export class ColumnBuilder {
   rows = 0;
@@ -23,6 +26,8 @@ export class ColumnBuilder {
   tokens = 0;
   notNumbers = 0;
   numeric = 0;
+  /** Number cells whose value is not an integer. */
+  nonIntegers = 0;
   min = Infinity;
   max = -Infinity;
   dictionary: Map<string, number> | null;
@@ -69,7 +74,7 @@ export class ColumnBuilder {
     const { kind, value } = cellKind(cell, this.decimal);
     this.count(kind, value, cell, row, line);
     if (this.list) this.list.push(detach(cell));
-    else if (this.sparseRows && (kind === CellKind.token || kind === CellKind.text)) {
+    else if (this.sparseRows && keepsText(kind, value, cell)) {
       this.sparseRows.push(row);
       this.sparseTexts!.push(detach(cell));
     }
@@ -95,6 +100,7 @@ export class ColumnBuilder {
     this.numbers.push(value);
     if (kind === CellKind.number) {
       this.numeric++;
+      if (!Number.isInteger(value)) this.nonIntegers++;
       if (value < this.min) this.min = value;
       if (value > this.max) this.max = value;
       if (this.firstNumbers.length < shownCells) this.firstNumbers.push(detach(cell));
@@ -122,8 +128,7 @@ export class ColumnBuilder {
       this.sparseTexts = [];
       for (let r = 0; r < this.rows; ++r) {
         const code = codes.get(r);
-        const kind = code === emptyCode ? CellKind.blank : this.levelKinds[code];
-        if (kind !== CellKind.token && kind !== CellKind.text) continue;
+        if (code === emptyCode || !keepsText(this.levelKinds[code]!, this.levelValues[code]!, this.rawLevels[code]!)) continue;
         this.sparseRows.push(r);
         this.sparseTexts.push(this.rawLevels[code]!);
       }
@@ -144,11 +149,30 @@ export class ColumnBuilder {
     this.sparseRows = new GrowableUint32();
     this.sparseTexts = [];
     for (let r = 0; r < list.length; ++r) {
-      const { kind } = cellKind(list[r]!, this.decimal);
-      if (kind !== CellKind.token && kind !== CellKind.text) continue;
+      const { kind, value } = cellKind(list[r]!, this.decimal);
+      if (!keepsText(kind, value, list[r]!)) continue;
       this.sparseRows.push(r);
       this.sparseTexts.push(list[r]!);
     }
     this.list = null;
   }
+}
+
+/** True for a cell whose text a sparse column keeps: a token, text, or an integer not written in its shortest form. */
+export function keepsText(kind: CellKind, value: number, cell: string): boolean {
+  if (kind === CellKind.token || kind === CellKind.text) return true;
+  return kind === CellKind.number && Number.isInteger(value) && !isPlainInteger(cell) && cell !== String(value);
+}
+
+// Digits with an optional minus sign, no leading zero, at most 15 digits: exactly String(value) for such an integer.
+function isPlainInteger(cell: string): boolean {
+  const start = cell.charCodeAt(0) === 45 ? 1 : 0; // "-"
+  const digits = cell.length - start;
+  if (digits < 1 || digits > 15) return false;
+  if (cell.charCodeAt(start) === 48) return digits === 1 && start === 0; // "0" alone
+  for (let k = start; k < cell.length; ++k) {
+    const c = cell.charCodeAt(k);
+    if (c < 48 || c > 57) return false;
+  }
+  return true;
 }

@@ -1,5 +1,7 @@
 import { CellKind, type KeptCell } from "./cellKind.ts";
 import { emptyCode, type ColumnBuilder } from "./columnBuilder.ts";
+import { looksLikeRowNumber } from "./looksLikeRowNumber.ts";
+import { originalTexts } from "./originalTexts.ts";
 import { distinctCap, numericShare, shownCells } from "./readOptions.ts";
 import type { ColumnReport, FlaggedCell } from "./tableReport.ts";
 import type { ColumnType, TableColumn } from "./types.ts";
@@ -21,7 +23,9 @@ export interface FinishedColumn {
  *   at least 95% numbers                   → "numeric", the other cells become missing and are flagged;
  *   otherwise text: all distinct (n ≥ 2) or more than 10,000 distinct → "identifier", else "categorical".
  * Distinct values are exact up to 10,000 (numbers compared as numbers), then "at least".
- * Text columns keep every cell's text; categorical ones also get level codes.
+ * Text columns keep every cell's text; categorical ones also get level codes. Numeric columns
+ * keep the text of the cells not written as their number's shortest form (`originalTexts`), and
+ * the report says whether the column looks like a row number or id (`looksLikeRowNumber`).
  */
 export function finishColumn(builder: ColumnBuilder, name: string, header: string): FinishedColumn {
   const present = builder.numeric + builder.notNumbers;
@@ -35,9 +39,12 @@ export function finishColumn(builder: ColumnBuilder, name: string, header: strin
     const flagged = [...tokens, ...flag(builder.firstNotNumbers, "not-a-number")].sort((a, b) => a.row - b.row).slice(0, shownCells);
     const distinct = builder.dictionary ? new Set(builder.levelValues.filter((x) => x === x)).size : builder.numberSet!.size;
     const missing = builder.rows - builder.numeric;
+    const original = originalTexts(builder);
+    const rowNumber = builder.nonIntegers === 0 && looksLikeRowNumber(numbers, { hasOriginalTexts: original !== null, notNumbers: builder.notNumbers });
     const report: ColumnReport = { name, header, type: "numeric", missing, distinct, distinctAtLeast: !builder.dictionary && distinct >= distinctCap,
-      min: builder.min, max: builder.max, firstValues: [...builder.firstNumbers], flagged, flaggedCount: builder.tokens + builder.notNumbers };
-    return { column: { name, kind: "numeric", type: "numeric", numbers, texts: null, missing }, report, reformatted: false };
+      min: builder.min, max: builder.max, firstValues: [...builder.firstNumbers], flagged, flaggedCount: builder.tokens + builder.notNumbers, looksLikeRowNumber: rowNumber };
+    const column: TableColumn = { name, kind: "numeric", type: "numeric", numbers, texts: null, missing, ...(original ? { originalTexts: original } : {}) };
+    return { column, report, reformatted: false };
   }
 
   const { texts, codes, reformatted } = cellTexts(builder, numbers);
@@ -48,7 +55,7 @@ export function finishColumn(builder: ColumnBuilder, name: string, header: strin
   let type: ColumnType = "categorical";
   if (present === 0) type = "empty";
   else if (!exact || distinct > distinctCap || (distinct === present && present >= 2)) type = "identifier";
-  const report: ColumnReport = { name, header, type, missing, distinct, distinctAtLeast: !exact, min: NaN, max: NaN, firstValues: [...builder.firstValues], flagged: tokens, flaggedCount: builder.tokens };
+  const report: ColumnReport = { name, header, type, missing, distinct, distinctAtLeast: !exact, min: NaN, max: NaN, firstValues: [...builder.firstValues], flagged: tokens, flaggedCount: builder.tokens, looksLikeRowNumber: false };
   const column: TableColumn = { name, kind: "text", type, numbers, texts, missing };
   if (type !== "categorical" || !codes) return { column, report, reformatted };
   return { column: { ...column, categories: levelCodes(codes, builder.rawLevels, isPresent) }, report, reformatted };

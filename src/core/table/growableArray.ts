@@ -16,6 +16,10 @@ export class GrowableFloat64 {
     this.data[this.length++] = value;
   }
 
+  get(i: number): number {
+    return this.data[i]!;
+  }
+
   /** A copy trimmed to the length, with a buffer of its own (so it can be transferred). */
   toArray(): Float64Array {
     return this.data.slice(0, this.length);

@@ -1,6 +1,11 @@
 /** Field delimiters the reader detects or accepts. */
 export const delimiters = [",", ";", "\t", "|"] as const;
 export type Delimiter = (typeof delimiters)[number];
+/** The one name of each delimiter, used by the headless command, the workbench and summary.json. */
+export const delimiterNames = { ",": "comma", ";": "semicolon", "\t": "tab", "|": "pipe" } as const satisfies Record<Delimiter, string>;
+export type DelimiterName = (typeof delimiterNames)[Delimiter];
+/** How the workbench shows each delimiter: the character, then its name. */
+export const delimiterLabels: Readonly<Record<Delimiter, string>> = { ",": ", (comma)", ";": "; (semicolon)", "\t": "tab", "|": "| (pipe)" };
 
 /** Decimal marks: "." (12.5) or "," (12,5, usually with ";" or tab between fields). */
 export type DecimalMark = "." | ",";
@@ -33,7 +38,7 @@ export const numericShare = 0.95; // our choice, no source
 /** Offending cells kept per column for the report, and records named in notices and errors. */
 export const shownCells = 5; // our choice, no source
 
-/** Normalises a delimiter given by name or character; throws for anything else. */
+/** Normalises a delimiter given by name (`delimiterNames`, or `\\t`) or character; throws for anything else. */
 export function maybeDelimiter(value: string): Delimiter {
   const named: Record<string, Delimiter> = { comma: ",", semicolon: ";", tab: "\t", "\\t": "\t", pipe: "|" };
   const delimiter = named[value.toLowerCase()] ?? value;

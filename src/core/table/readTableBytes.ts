@@ -61,9 +61,15 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
   for (let start = detected.bomLength; start < size; start += step) {
     stop();
     const end = Math.min(size, start + step);
+    let bytes: Uint8Array;
+    try {
+      bytes = await source.read(start, end);
+    } catch (error) {
+      throw new Error(`cannot read the file at bytes ${start} to ${end}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+    }
     let text: string;
     try {
-      text = decode(await source.read(start, end), end === size);
+      text = decode(bytes, end === size);
     } catch {
       throw new Error(`the file is not valid utf-8 near byte ${start}: choose windows-1252 if it was saved by a spreadsheet`);
     }

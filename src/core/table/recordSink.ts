@@ -10,8 +10,11 @@ export interface RaggedRecord {
 
 /**
  * The reader's record-by-record state: line numbers, the header, one column builder per header
- * field, and the first ragged and malformed records. Blank lines are not records; a record starts
- * on `line` and takes one line plus the line breaks inside its fields.
+ * field, and the first ragged and malformed records. A record starts on `line` and takes one line
+ * plus the line breaks inside its fields. An empty line is decided by the header's width:
+ * - before the header, or in a file of several columns: not a record, counted in `emptyLines`;
+ * - in a file of one column: a record whose one cell is empty (a missing value), since that is
+ *   how a spreadsheet saves an empty cell there; skipping it would shift every later row number.
  */
 export class RecordSink {
   /** The 1-based line on which the next record starts. */
@@ -23,6 +26,8 @@ export class RecordSink {
   raggedCount = 0;
   readonly malformed: { row: number; line: number }[] = [];
   malformedCount = 0;
+  /** Wholly empty lines that are not records (see above). */
+  emptyLines = 0;
 
   constructor(private readonly decimal: DecimalMark) {}
 
@@ -32,7 +37,10 @@ export class RecordSink {
       const record = records[k]!;
       const line = this.line;
       this.line += mayHoldLineBreaks ? lineCount(record) : 1;
-      if (record.length === 1 && record[0] === "") continue;
+      if (record.length === 1 && record[0] === "" && this.builders.length !== 1) {
+        this.emptyLines++;
+        continue;
+      }
       if (this.header === null) {
         this.header = record;
         this.builders = record.map(() => new ColumnBuilder(this.decimal));

@@ -26,6 +26,10 @@ export function tableOutcome(sink: RecordSink, format: TableFormat, ragged: Ragg
     if (ragged === "reject") throw new Error(`ragged records: the header has ${width} fields but ${shown}${more} ${lines}`);
     notices.push({ code: "ragged-records", message: `padded short records with empty cells and cut long ones to the header's ${width} fields: ${shown}${more} ${lines}` });
   }
+  if (sink.emptyLines > 0) {
+    const lines = `${sink.emptyLines} wholly empty line${sink.emptyLines === 1 ? "" : "s"}`;
+    notices.push({ code: "empty-lines", message: `skipped ${lines}: not records, so record k is on spreadsheet row k + 1 plus the empty lines above it` });
+  }
   const named = uniqueNames(header);
   notices.push(...named.notices);
   if (sink.malformedCount > 0) {
@@ -41,13 +45,18 @@ export function tableOutcome(sink: RecordSink, format: TableFormat, ragged: Ragg
     if (finished.reformatted) notices.push({ code: "texts-reformatted", message: `column ${finished.column.name} became text after many numbers: its numbers are shown in shortest form` });
   }
   notices.push(...tableNotices(sink.rows, reports, format));
-  return { table: { rows: sink.rows, columns }, report: { format, rows: sink.rows, lines: sink.line - 1, columns: reports, notices } };
+  return { table: { rows: sink.rows, columns }, report: { format, rows: sink.rows, lines: sink.line - 1, emptyLines: sink.emptyLines, columns: reports, notices } };
 }
 
 /** Notices about the table as a whole, shared with the Parquet reader. */
 export function tableNotices(rows: number, reports: readonly ColumnReport[], format: TableFormat): Notice[] {
   const notices: Notice[] = [];
   if (rows === 1) notices.push({ code: "one-row", message: "the table has one data record: it can be shown, but scaling and a graph need at least two" });
+  const rowNumbers = reports.filter((r) => r.looksLikeRowNumber).map((r) => r.name);
+  if (rowNumbers.length > 0) {
+    const which = rowNumbers.length === 1 ? `column ${rowNumbers[0]} looks` : `columns ${rowNumbers.join(", ")} look`;
+    notices.push({ code: "row-number-column", message: `${which} like a row number or numeric id (distinct whole numbers): suggested role "row label", not a feature` });
+  }
   if (!reports.some((r) => r.type === "numeric")) {
     const read = format.kind === "delimited" ? ` (read with delimiter ${JSON.stringify(format.delimiter)} and decimal mark ${JSON.stringify(format.decimal)})` : "";
     notices.push({ code: "no-numeric-column", message: `no numeric column among ${reports.map((r) => r.name).join(", ")}${read}` });

@@ -34,9 +34,15 @@ export interface ColumnReport {
   readonly flagged: readonly FlaggedCell[];
   /** How many non-empty cells were counted as missing in all. */
   readonly flaggedCount: number;
+  /**
+   * A numeric column that looks like a row number or a numeric id (rule in `looksLikeRowNumber`:
+   * distinct integers, consecutive after sorting or written with leading zeros or past 15 digits):
+   * better the row label than a feature.
+   */
+  readonly looksLikeRowNumber: boolean;
 }
 
-export type NoticeCode = "renamed-column" | "ragged-records" | "one-row" | "no-numeric-column" | "malformed-quotes" | "texts-reformatted" | "skipped-column" | "large-integers";
+export type NoticeCode = "renamed-column" | "ragged-records" | "one-row" | "no-numeric-column" | "malformed-quotes" | "texts-reformatted" | "skipped-column" | "large-integers" | "row-number-column" | "empty-lines";
 
 /** Something the reader changed or wants the user to know; the message is lowercase and names the values. */
 export interface Notice {
@@ -55,6 +61,11 @@ export interface TableReport {
   readonly rows: number;
   /** Lines of text read, blank lines and quoted line breaks included; null for Parquet. */
   readonly lines: number | null;
+  /**
+   * Wholly empty lines that were not records (before the header, or anywhere in a file of several
+   * columns); absent for Parquet. In a one-column file an empty line is a record with a missing value.
+   */
+  readonly emptyLines?: number;
   readonly columns: readonly ColumnReport[];
   readonly notices: readonly Notice[];
 }

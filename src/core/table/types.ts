@@ -13,6 +13,12 @@ export interface Categories {
   readonly levels: readonly string[];
 }
 
+/** Cells of a numeric column written otherwise than as their number's shortest form: `texts[k]` is row `rows[k]`'s text, rows ascending. */
+export interface OriginalTexts {
+  readonly rows: Uint32Array;
+  readonly texts: readonly string[];
+}
+
 /** One column of a parsed table. `numbers` holds NaN wherever a cell is missing or not a number. */
 export interface TableColumn {
   readonly name: string;
@@ -21,6 +27,11 @@ export interface TableColumn {
   readonly numbers: Float64Array;
   /** Raw cell text, kept for text columns only (ids, categories; "" for an empty cell). */
   readonly texts: readonly string[] | null;
+  /**
+   * Numeric columns only: the cells whose text is not their number's shortest form, as written
+   * (`007`, `12345678901234567890123`), so a numeric row label can be written back exactly; see `cellText`.
+   */
+  readonly originalTexts?: OriginalTexts;
   /** Cells counted as missing (in a numeric column this includes cells that are not numbers). */
   readonly missing: number;
   /** The reader's finer type; absent in tables built by hand. */

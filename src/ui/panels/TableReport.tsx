@@ -29,7 +29,7 @@ export function TableReport() {
           {report.columns.map((c) => (
             <tr key={c.name}>
               <th scope="row" title={c.header === c.name ? undefined : `header in the file: ${c.header}`}>{c.name}</th>
-              <td>{typeLabel[c.type]}</td>
+              <td>{typeLabel[c.type]}{c.looksLikeRowNumber && <span className="row-number-flag" title="distinct whole numbers, consecutive or written as ids: suggested role row label"> · looks like a row number</span>}</td>
               <td>{roles[c.name] ?? "ignore"}</td>
               <td>{formatCount(c.missing)}</td>
               <td>{c.distinctAtLeast ? "≥ " : ""}{formatCount(c.distinct)}</td>

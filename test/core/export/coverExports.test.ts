@@ -34,8 +34,8 @@ describe("coverExports", () => {
     const summary = JSON.parse(files["summary.json"]);
     expect(summary).toMatchObject({
       schema: "shoal-cover-export",
-      schemaVersion: 1,
-      input: { fileName: "line.csv", fileSize: 123 },
+      schemaVersion: 2,
+      input: { fileName: "line.csv", fileSize: 123, reading: null },
       params: { features: ["x"], scale: "zscore", metric: "euclidean", radius: 1.5 / lineSd, landmarks: "greedy-file-order", seed: 1, idColumn: "id", outcomes: ["y"] },
       rows: { read: 7, used: 6, dropped: 1, firstDroppedRows: [3] }, // worked by hand: record 3 (p3) has no x
       constantColumns: [],
@@ -45,7 +45,7 @@ describe("coverExports", () => {
       cycleRank: 0, // simple formula: E − V + C = 1 − 3 + 2
       memberships: 7, // worked by hand: 2 + 3 + 2
     });
-    expect(exportSchemaVersion).toBe(1);
+    expect(exportSchemaVersion).toBe(2); // version 2: input.reading and numeric row labels as read
   });
 
   it("the radius in summary.json reads back as the same double", () => {
@@ -92,5 +92,19 @@ describe("coverExports", () => {
     const table = parseCsvText("code,x\n-5,0\n8,10\n");
     const built = buildCover(table, { ...params, radius: 0.1 });
     expect(coverExports(table, built, { ...context, idColumn: "code", outcomes: [] })["members.csv"]).toBe("node,row,code\n1,1,-5\n2,2,8\n");
+  });
+
+  it("a numeric row label is written exactly as read: 007 and 12345678901234567890123, not 7 and 1.2345678901234568e+22", () => {
+    const table = parseCsvText("code,x\n007,0\n12345678901234567890123,10\n");
+    const built = buildCover(table, { ...params, radius: 0.1 });
+    expect(coverExports(table, built, { ...context, idColumn: "code", outcomes: [] })["members.csv"]).toBe(
+      "node,row,code\n1,1,007\n2,2,12345678901234567890123\n", // the cells of the file
+    );
+  });
+
+  it("summary.json stores how the file was read under the command's names (delimiter pipe, ragged pad)", () => {
+    const reading = { format: "delimited", delimiter: "pipe", decimal: ".", ragged: "pad" } as const;
+    const summary = JSON.parse(coverExports(parsed, result, { ...context, reading })["summary.json"]);
+    expect(summary.input).toEqual({ fileName: "line.csv", fileSize: 123, reading: { format: "delimited", delimiter: "pipe", decimal: ".", ragged: "pad" } });
   });
 });
