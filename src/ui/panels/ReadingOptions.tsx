@@ -2,7 +2,7 @@ import type { ByteReadOptions, TableFormat } from "../../core/index.ts";
 import { actions } from "../../state/actions.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
-const delimiterLabel: Record<string, string> = { ",": "comma", ";": "semicolon", "\t": "tab", "|": "vertical bar" };
+const delimiterLabel: Record<string, string> = { ",": ", (comma)", ";": "; (semicolon)", "\t": "tab", "|": "| (pipe)" };
 
 /** How the file was read (detected or chosen) and the controls to read it again differently. */
 export function ReadingOptions() {
