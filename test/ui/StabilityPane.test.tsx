@@ -61,3 +61,13 @@ it("with a region selected, the sweep's notes explain region match as the Jaccar
   const notes = screen.getByRole("list", { name: "how to read the sweep" }).textContent!;
   expect(notes).toContain("Region match: the Jaccard index of the region's rows and the best-matching connected node set, shared rows over rows in either (1 = the same rows).");
 });
+
+it("the seed summary's rows are nodes, edges, 'components (b0)' and 'loops (b1)'", async () => {
+  render(<StabilityPane />);
+  await loadSmallTable();
+  await act(async () => {
+    await actions().runSeedStability();
+  });
+  const summary = screen.getByTestId("seed-summary");
+  expect(within(summary).getAllByRole("rowheader").map((h) => h.textContent)).toEqual(["nodes", "edges", "components (b0)", "loops (b1)"]);
+});
