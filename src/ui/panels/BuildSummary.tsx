@@ -23,10 +23,10 @@ export function BuildSummary() {
         <dl className="counts" data-testid="graph-counts">
           <div><dt>nodes</dt><dd data-testid="node-count">{formatCount(result.landmarks.length)}</dd></div>
           <div><dt>edges</dt><dd data-testid="edge-count">{formatCount(result.edges.source.length)}</dd></div>
-          <div><dt>components (b0)</dt><dd data-testid="component-count">{formatCount(result.componentCount)}</dd></div>
+          <div className="wide"><dt>components (b0)</dt><dd data-testid="component-count">{formatCount(result.componentCount)}</dd></div>
           <div><dt>loops (b1)</dt><dd data-testid="b1">{result.betti ? formatCount(result.betti.b1) : "–"}</dd></div>
           <div><dt>cycle rank</dt><dd data-testid="cycle-rank">{formatCount(result.cycleRank)}</dd></div>
-          <div>
+          <div className="wide">
             <dt>rows used</dt>
             <dd>{formatCount(result.usedRows.length)} of {formatCount(result.rowsRead)}</dd>
           </div>
