@@ -57,7 +57,7 @@ export function CoverControls() {
         </select>
       </label>
       <p id="landmark-note" className="note">
-        Landmark: a row chosen as the centre of a ball, the rows within the radius of it; every row lies in at least one ball.
+        Landmark: a row chosen as a centre; its ball is every row within the radius of it, and every row lies in at least one ball.
       </p>
       <SeedField />
     </fieldset>
