@@ -58,3 +58,27 @@ it("the seed field is disabled in file order and enabled after choosing 'greedy,
   expect(seed.disabled).toBe(false);
   await waitFor(() => expect(workbenchStore.getState().result?.params.landmarks).toBe("greedy-shuffled"));
 });
+
+it("the button back to the default radius is labelled 'Default radius' and no control says 'Suggest'", () => {
+  render(<CoverControls />);
+  expect(screen.getByRole("button", { name: "Default radius" })).toBeTruthy();
+  expect(screen.queryByText(/suggest/i)).toBeNull();
+});
+
+it("one line under the radius says its units, and it follows the scaling and the metric", async () => {
+  const user = userEvent.setup();
+  render(<CoverControls />);
+  await loadSmallTable();
+  const units = (): string => document.getElementById(radiusField().getAttribute("aria-describedby")!)!.textContent!;
+  expect(units()).toBe("Radius units: standard deviations of each feature; straight-line distance, after weights."); // z-score and Euclidean, the defaults
+  await user.selectOptions(screen.getByRole("combobox", { name: "Scaling" }), "min–max [0, 1]");
+  expect(units()).toBe("Radius units: shares of each feature's range (0 to 1); straight-line distance, after weights.");
+  await user.selectOptions(screen.getByRole("combobox", { name: "Metric" }), "cosine (1 − cos)");
+  expect(units()).toBe("Radius units: none; the distance is 1 − cosine of the angle between rows, from 0 to 2, whatever the scaling.");
+});
+
+it("one line under the landmark order says what a landmark is", () => {
+  render(<CoverControls />);
+  const order = screen.getByRole("combobox", { name: "Landmark order" });
+  expect(document.getElementById(order.getAttribute("aria-describedby")!)!.textContent).toBe("Landmark: a row chosen as a centre; its ball is every row within the radius of it, and every row lies in at least one ball.");
+});

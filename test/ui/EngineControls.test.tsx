@@ -16,7 +16,7 @@ it("choosing the robust scaling rebuilds with scale robust and a newly suggested
   await user.selectOptions(screen.getByRole("combobox", { name: "Scaling" }), "robust");
   await waitFor(() => expect(workbenchStore.getState().result?.params.scale).toBe("robust"));
   expect(workbenchStore.getState().radius).toBe(workbenchStore.getState().suggestedRadius); // the default rule re-applied
-  expect(screen.getByText(/interquartile range/)).toBeTruthy();
+  expect(screen.getByText(/\(x − median\) \/ interquartile range/)).toBeTruthy();
 });
 
 it("filling missing values with the median keeps all 8 rows and reports 1 value filled for x", async () => {
@@ -46,15 +46,24 @@ it("a feature weight of 0 typed in the column list rebuilds with that weight in 
   await waitFor(() => expect(workbenchStore.getState().result?.params.weights).toEqual({ y: 0 }));
 });
 
-it("the summary shows cycle rank, b0 and b1 equal to the result's", async () => {
+it("the summary shows cycle rank and b1 equal to the result's, and b0 once, as the count labelled 'components (b0)'", async () => {
   render(<BuildSummary />);
   await loadSmallTable();
   const result = workbenchStore.getState().result!;
   expect(screen.getByTestId("cycle-rank").textContent).toBe(String(result.cycleRank));
-  expect(screen.getByTestId("b0").textContent).toBe(String(result.betti!.b0));
   expect(screen.getByTestId("b1").textContent).toBe(String(result.betti!.b1));
   expect(result.cycleRank).toBe(0); // 3 nodes in a path, 2 edges (smallTable.ts): 2 − 3 + 1
+  const terms = screen.getAllByRole("term").map((t) => t.textContent);
+  expect(terms.filter((t) => /b0|component/.test(t ?? ""))).toEqual(["components (b0)"]); // one count, not two
+  expect(screen.getByTestId("component-count").textContent).toBe(String(result.betti!.b0));
   expect(screen.getByText(/three balls overlapping in pairs/)).toBeTruthy();
+});
+
+it("the loops note defines a ball where it first uses the word", async () => {
+  render(<BuildSummary />);
+  await loadSmallTable();
+  const note = document.querySelector(".loops-note")!.textContent!.replace(/\s+/g, " ");
+  expect(note.indexOf("A ball is the set of rows within the radius of one landmark")).toBe(0);
 });
 
 it("a categorical column set to 'feature (one-hot)' rebuilds with it in the one-hot parameters", async () => {

@@ -39,7 +39,7 @@ it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, membe
   // fake setTimeout for the click alone: the download revokes its URL 10 s later, which must not
   // outlive the test (user-event's own waits need real timers, so this click is a plain event)
   vi.useFakeTimers({ toFake: ["setTimeout", "clearTimeout"] });
-  fireEvent.click(screen.getByRole("button", { name: "Export tables (.zip)" }));
+  fireEvent.click(screen.getByRole("button", { name: "Export tables (.zip) contains row-level data" }));
 
   expect(links).toHaveLength(1);
   expect(links[0]!.download).toBe(`small-cover-r${smallRadius}.zip`);
@@ -63,7 +63,7 @@ it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, membe
 it("is disabled, and saves nothing, before a graph is built", async () => {
   const user = userEvent.setup();
   render(<ExportButton />);
-  const button = screen.getByRole("button", { name: "Export tables (.zip)" }) as HTMLButtonElement;
+  const button = screen.getByRole("button", { name: "Export tables (.zip) contains row-level data" }) as HTMLButtonElement;
   expect(button.disabled).toBe(true);
   await user.click(button);
   expect(links).toEqual([]);

@@ -81,3 +81,13 @@ it("the close button clears the selection and closes the pane", async () => {
   expect(screen.queryByTestId("node-pane")).toBeNull();
   expect((list as HTMLSelectElement).value).toBe(""); // the list shows no node chosen once the pane is closed
 });
+
+it("under the statistics one line says bold marks |Δ| ≥ 1 and that bold is not statistical significance", async () => {
+  const user = userEvent.setup();
+  render(<Inspector />);
+  await loadSmallTable();
+  await user.selectOptions(screen.getByRole("listbox", { name: "nodes" }), "0");
+  const note = screen.getByTestId("bold-note").textContent!.replace(/\s+/g, " ");
+  expect(note).toContain("Bold where |Δ| ≥ 1");
+  expect(note).toContain("bold is not statistical significance");
+});

@@ -22,7 +22,7 @@ it("a source that is not the demo shows no 'invented demo data' flag", async () 
 
 it("'Export tables (.zip)' is disabled before a build and enabled once a graph is built", async () => {
   render(<SourceBar />);
-  const exportButton = screen.getByRole("button", { name: "Export tables (.zip)" }) as HTMLButtonElement;
+  const exportButton = screen.getByRole("button", { name: "Export tables (.zip) contains row-level data" }) as HTMLButtonElement;
   expect(exportButton.disabled).toBe(true);
   await loadSmallTable();
   expect(exportButton.disabled).toBe(false);

@@ -33,6 +33,33 @@ export interface Paint {
 
 const segmentsPerStroke = 256;
 
+/** A ring in two bands, in screen pixels: a light band against the node's fill, a dark band against the page. */
+export interface Ring {
+  readonly light: string;
+  readonly dark: string;
+  readonly lightWidth: number;
+  readonly darkWidth: number;
+}
+
+// ink and paper, never a palette or accent colour: a light band touches the fill (visible on the darkest
+// palette colour), a dark band touches the page (visible on the light background)
+export const selectionRing: Ring = { light: "#ffffff", dark: "#23272f", lightWidth: 2.5, darkWidth: 3 };
+export const regionRing: Ring = { light: "#ffffff", dark: "#23272f", lightWidth: 1.5, darkWidth: 1.5 };
+
+function doubleRing(context: CanvasRenderingContext2D, node: { x: number; y: number; radius: number }, k: number, ring: Ring): void {
+  const bands = [
+    { colour: ring.light, width: ring.lightWidth, middle: ring.lightWidth / 2 },
+    { colour: ring.dark, width: ring.darkWidth, middle: ring.lightWidth + ring.darkWidth / 2 },
+  ];
+  for (const band of bands) {
+    context.lineWidth = band.width / k;
+    context.strokeStyle = band.colour;
+    context.beginPath();
+    context.arc(node.x, node.y, node.radius + band.middle / k, 0, 2 * Math.PI);
+    context.stroke();
+  }
+}
+
 export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, view: View, paint: Paint): void {
   context.clearRect(0, 0, paint.width, paint.height);
   context.save();
@@ -73,25 +100,12 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
     context.arc(node.x, node.y, node.radius, 0, 2 * Math.PI);
   }
   context.stroke();
-  context.lineWidth = 2.5 / view.k;
-  context.strokeStyle = "#23272f";
   for (const k of paint.region) {
     const node = layout.nodes[k];
-    if (!node) continue;
-    context.beginPath();
-    context.arc(node.x, node.y, node.radius + 1.5 / view.k, 0, 2 * Math.PI);
-    context.stroke();
+    if (node) doubleRing(context, node, view.k, regionRing);
   }
   const chosen = paint.selected === null ? undefined : layout.nodes[paint.selected];
-  if (chosen) {
-    context.lineWidth = 3 / view.k;
-    context.strokeStyle = "#c2410c";
-    context.setLineDash([4 / view.k, 3 / view.k]);
-    context.beginPath();
-    context.arc(chosen.x, chosen.y, chosen.radius + 4 / view.k, 0, 2 * Math.PI);
-    context.stroke();
-    context.setLineDash([]);
-  }
+  if (chosen) doubleRing(context, chosen, view.k, selectionRing);
   context.restore();
 }
 

@@ -23,11 +23,10 @@ export function BuildSummary() {
         <dl className="counts" data-testid="graph-counts">
           <div><dt>nodes</dt><dd data-testid="node-count">{formatCount(result.landmarks.length)}</dd></div>
           <div><dt>edges</dt><dd data-testid="edge-count">{formatCount(result.edges.source.length)}</dd></div>
-          <div><dt>components</dt><dd data-testid="component-count">{formatCount(result.componentCount)}</dd></div>
+          <div className="wide"><dt>components (b0)</dt><dd data-testid="component-count">{formatCount(result.componentCount)}</dd></div>
+          <div><dt>loops (b1)</dt><dd data-testid="b1">{result.betti ? formatCount(result.betti.b1) : "–"}</dd></div>
           <div><dt>cycle rank</dt><dd data-testid="cycle-rank">{formatCount(result.cycleRank)}</dd></div>
-          <div><dt>b0</dt><dd data-testid="b0">{result.betti ? formatCount(result.betti.b0) : "–"}</dd></div>
-          <div><dt>b1</dt><dd data-testid="b1">{result.betti ? formatCount(result.betti.b1) : "–"}</dd></div>
-          <div>
+          <div className="wide">
             <dt>rows used</dt>
             <dd>{formatCount(result.usedRows.length)} of {formatCount(result.rowsRead)}</dd>
           </div>
@@ -35,8 +34,9 @@ export function BuildSummary() {
       )}
       {result && (
         <p className="loops-note">
-          Cycle rank counts every triangle of overlapping balls; b0 and b1 count pieces and loops once triples of balls sharing
-          a row are filled in. Both describe this sample: three balls overlapping in pairs with no row in all three add a loop.
+          A ball is the set of rows within the radius of one landmark; each node is one ball. Cycle rank counts every triangle of
+          overlapping balls as a loop; b1 counts loops once triples of balls sharing a row are filled in. Both describe this
+          sample: three balls overlapping in pairs with no row in all three add a loop.
         </p>
       )}
       {result && result.undefinedRows.length > 0 && (

@@ -1,11 +1,17 @@
-/** Always on screen: what these pictures can and cannot support. */
+import { cautionItems } from "./cautionItems.ts";
+
+/** Always on screen: what these pictures can and cannot support (the README's "Read with care", complete). */
 export function Cautions() {
   return (
     <footer className="cautions" aria-label="cautions">
-      <strong>Read with care.</strong> Exploratory, not causal: a region where an outcome is high does not show why. The graph
-      depends on the radius, the metric and the scaling. Looking at many regions is a multiple comparison: some will stand out
-      by chance. Follow your organisation's data-protection rules (the table stays on this machine). Decisions about individuals
-      need qualified review.
+      <strong className="cautions-title">Read with care</strong>
+      <ul>
+        {cautionItems.map((item) => (
+          <li key={item.heading}>
+            <strong>{item.heading}</strong> {item.text}
+          </li>
+        ))}
+      </ul>
     </footer>
   );
 }

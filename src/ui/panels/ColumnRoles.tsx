@@ -1,13 +1,12 @@
 import { actions } from "../../state/actions.ts";
 import type { ColumnRole } from "../../state/slices/paramsSlice.ts";
 import { useWorkbench } from "../useWorkbench.ts";
+import { roleLabel } from "./roleLabel.ts";
 import { WeightField } from "./WeightField.tsx";
 
 const numericRoles: readonly ColumnRole[] = ["feature", "outcome", "id", "ignore"];
 const textRoles: readonly ColumnRole[] = ["id", "ignore"];
 const categoricalRoles: readonly ColumnRole[] = ["feature", "id", "ignore"];
-const roleLabel: Record<ColumnRole, string> = { feature: "feature", outcome: "outcome", id: "row label", ignore: "not used" };
-const oneHotLabel = "feature (one-hot)";
 
 /** Every column with its role: features span the space; outcomes are only summarised and coloured. */
 export function ColumnRoles() {
@@ -35,7 +34,7 @@ export function ColumnRoles() {
                 onChange={(event) => void actions().setRole(column.name, event.currentTarget.value as ColumnRole)}
               >
                 {(column.kind === "numeric" ? numericRoles : column.categories ? categoricalRoles : textRoles).map((role) => (
-                  <option key={role} value={role}>{role === "feature" && column.kind !== "numeric" ? oneHotLabel : roleLabel[role]}</option>
+                  <option key={role} value={role}>{roleLabel(role, column.kind === "numeric")}</option>
                 ))}
               </select>
               {roles[column.name] === "feature" ? <WeightField column={column.name} /> : <span className="weight" />}

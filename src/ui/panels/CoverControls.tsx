@@ -52,10 +52,13 @@ export function CoverControls() {
       <RadiusControl />
       <label>
         Landmark order
-        <select value={landmarks} onChange={(e) => void actions().setLandmarks(e.currentTarget.value as LandmarkRule)}>
+        <select value={landmarks} aria-describedby="landmark-note" onChange={(e) => void actions().setLandmarks(e.currentTarget.value as LandmarkRule)}>
           {(Object.keys(orderLabel) as LandmarkRule[]).map((rule) => <option key={rule} value={rule}>{orderLabel[rule]}</option>)}
         </select>
       </label>
+      <p id="landmark-note" className="note">
+        Landmark: a row chosen as a centre; its ball is every row within the radius of it, and every row lies in at least one ball.
+      </p>
       <SeedField />
     </fieldset>
   );

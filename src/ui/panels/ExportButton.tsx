@@ -8,15 +8,16 @@ export function ExportButton() {
   return (
     <button
       type="button"
-      className="primary"
+      className="primary export"
       disabled={!ready}
-      title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README)"
+      title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README); members.csv lists the rows of every node"
       onClick={() => {
         const file = actions().exportCover();
         if (file) downloadBytes(file.fileName, file.bytes, "application/zip");
       }}
     >
-      Export tables (.zip)
+      <span>Export tables (.zip)</span>{" "}
+      <span className="export-note">contains row-level data</span>
     </button>
   );
 }

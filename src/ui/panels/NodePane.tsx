@@ -40,6 +40,9 @@ export function NodePane() {
           ))}
         </tbody>
       </table>
+      <p className="note" data-testid="bold-note">
+        Δ in sd: (node mean − mean of all rows) / sd of all rows. Bold where |Δ| ≥ 1, a large difference; bold is not statistical significance.
+      </p>
       <details>
         <summary>Quartiles and range</summary>
         <table>

@@ -1,19 +1,21 @@
 import { actions } from "../../state/actions.ts";
 import { useWorkbench } from "../useWorkbench.ts";
+import { radiusUnits } from "./radiusUnits.ts";
 import { useCommittedNumber } from "./useCommittedNumber.ts";
 
 const steps = 400; // slider positions on the log scale
-const span = 20; // the slider reaches from suggested / 20 to suggested · 20
+const span = 20; // the slider reaches from the default radius / 20 to the default radius · 20
 
 /**
- * Radius as a log-scaled slider around the suggested radius (its units depend on the metric
- * and scaling) plus a number field that accepts any positive value.
+ * Radius as a log-scaled slider around the default radius (its units depend on the metric
+ * and scaling, said in one line below) plus a number field that accepts any positive value.
  */
 export function RadiusControl() {
   const radius = useWorkbench((s) => s.radius);
-  const suggested = useWorkbench((s) => s.suggestedRadius);
+  const defaultRadius = useWorkbench((s) => s.suggestedRadius);
+  const units = useWorkbench((s) => radiusUnits(s.metric, s.scale));
   const field = useCommittedNumber(radius, (value) => value > 0 && Number.isFinite(value), (value) => void actions().setRadius(value));
-  const centre = suggested > 0 ? suggested : radius > 0 ? radius : 1;
+  const centre = defaultRadius > 0 ? defaultRadius : radius > 0 ? radius : 1;
   const lo = Math.log(centre / span);
   const hi = Math.log(centre * span);
   const position = Number.isNaN(radius) ? steps / 2 : Math.round(((Math.log(radius) - lo) / (hi - lo)) * steps);
@@ -37,11 +39,13 @@ export function RadiusControl() {
         type="number"
         min={0}
         step="any"
+        aria-describedby="radius-units"
         {...field}
       />
-      <button type="button" onClick={() => void actions().suggestRadius()} title="Radius at which about 1.5·√n landmarks cover the rows (at least min(30, n/5), at most 150); see the README">
-        Suggest
+      <button type="button" onClick={() => void actions().suggestRadius()} title="Back to the default radius: the radius at which about 1.5·√n landmarks cover the rows (at least min(30, n/5), at most 150); see the README">
+        Default radius
       </button>
+      <p id="radius-units" className="note radius-units">{units}</p>
     </div>
   );
 }

@@ -2,7 +2,11 @@ import type { ByteReadOptions, TableFormat } from "../../core/index.ts";
 import { actions } from "../../state/actions.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
+<<<<<<< HEAD
 const delimiterLabel: Record<string, string> = { ",": "comma", ";": "semicolon", "\t": "tab", "|": "| (pipe)" };
+=======
+const delimiterLabel: Record<string, string> = { ",": ", (comma)", ";": "; (semicolon)", "\t": "tab", "|": "| (pipe)" };
+>>>>>>> wip/ui
 
 /** How the file was read (detected or chosen) and the controls to read it again differently. */
 export function ReadingOptions() {

@@ -8,8 +8,8 @@ export function SeedSummary() {
   const rows = [
     ["nodes", runs.spread.nodes],
     ["edges", runs.spread.edges],
-    ["b0", runs.spread.b0],
-    ["b1", runs.spread.b1],
+    ["components (b0)", runs.spread.b0],
+    ["loops (b1)", runs.spread.b1],
   ] as const;
   return (
     <section className="seed-summary" data-testid="seed-summary">

@@ -3,6 +3,7 @@ import { formatNumber, plural } from "../format.ts";
 import { SweepChart } from "../graph/SweepChart.tsx";
 import { useWorkbench } from "../useWorkbench.ts";
 import { SeedSummary } from "./SeedSummary.tsx";
+import { SweepNotes } from "./SweepNotes.tsx";
 import { SweepSettings } from "./SweepSettings.tsx";
 
 /** Evidence that the picture holds: the radius sweep, the region's match across radii, and seed stability. */
@@ -12,6 +13,7 @@ export function StabilityPane() {
   const radius = useWorkbench((s) => s.radius);
   const status = useWorkbench((s) => s.stability);
   const regionSize = useWorkbench((s) => s.regionNodes.length);
+  const seed = useWorkbench((s) => s.seed);
   return (
     <section className="stability-pane" aria-label="stability" data-testid="stability-pane">
       <SweepSettings />
@@ -22,8 +24,13 @@ export function StabilityPane() {
       </p>
       <div className="stability-actions">
         <button type="button" onClick={() => void actions().runSweep()} disabled={status.state === "running"}>Sweep radii</button>
-        <button type="button" onClick={() => void actions().runSeedStability()} disabled={status.state === "running"}>Rebuild with other seeds</button>
+        <button type="button" onClick={() => void actions().runSeedStability()} disabled={status.state === "running"} aria-describedby="seed-run-note">
+          Rebuild with other seeds
+        </button>
       </div>
+      <p id="seed-run-note" className="note">
+        The seed rebuilds always use the greedy, seeded shuffle order (seeds {seed}, {seed + 1}, …), whatever landmark order is chosen above.
+      </p>
       {status.state === "running" && (
         <div className="progress" data-testid="stability-progress">
           <span>{status.task === "sweep" ? "Sweeping radii…" : "Rebuilding with other seeds…"}</span>
@@ -35,18 +42,15 @@ export function StabilityPane() {
       {sweep && (
         <>
           <SweepChart sweep={sweep} region={region} radius={radius} onPick={(r) => void actions().setRadius(r)} />
-          <p className="note">
-            Shaded: plateaus, radius intervals over which b0 and b1 do not change (darkest: the suggested one). Dashed line:
-            suggested start, {sweep.suggestionRule}.{sweep.range.rule ? ` Range: ${sweep.range.rule}.` : ""}
-          </p>
+          <SweepNotes sweep={sweep} hasRegion={region !== null} />
           <label className="sweep-jump">
             Rebuild at a swept radius
             <select value="" onChange={(e) => e.currentTarget.value && void actions().setRadius(Number(e.currentTarget.value))}>
               <option value="">choose…</option>
               {Array.from(sweep.figures.radius, (r, k) => (
                 <option key={k} value={r}>
-                  {formatNumber(r)} · {sweep.figures.nodes[k]} nodes · b0 {sweep.figures.b0[k]} · b1 {sweep.figures.b1[k]}
-                  {sweep.suggestion?.index === k ? " · suggested" : ""}
+                  {formatNumber(r)} · {sweep.figures.nodes[k]} nodes · {plural(sweep.figures.b0[k]!, "component")} · b1 {sweep.figures.b1[k]}
+                  {sweep.suggestion?.index === k ? " · plateau middle" : ""}
                 </option>
               ))}
             </select>

@@ -1,6 +1,7 @@
 import { formatCount, formatNumber } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { ReadingOptions } from "./ReadingOptions.tsx";
+import { roleLabel } from "./roleLabel.ts";
 
 const typeLabel = { numeric: "numeric", categorical: "categorical", identifier: "identifier-like", empty: "empty" } as const;
 
@@ -30,7 +31,7 @@ export function TableReport() {
             <tr key={c.name}>
               <th scope="row" title={c.header === c.name ? undefined : `header in the file: ${c.header}`}>{c.name}</th>
               <td>{typeLabel[c.type]}{c.looksLikeRowNumber && <span className="row-number-flag" title="distinct whole numbers, consecutive or written as ids: suggested role row label"> · looks like a row number</span>}</td>
-              <td>{roles[c.name] ?? "ignore"}</td>
+              <td>{roleLabel(roles[c.name] ?? "ignore", c.type === "numeric")}</td>
               <td>{formatCount(c.missing)}</td>
               <td>{c.distinctAtLeast ? "≥ " : ""}{formatCount(c.distinct)}</td>
               <td>{formatNumber(c.min)}</td>
