@@ -1,12 +1,8 @@
-import type { ByteReadOptions, TableFormat } from "../../core/index.ts";
+import { delimiterLabels, type ByteReadOptions, type TableFormat } from "../../core/index.ts";
 import { actions } from "../../state/actions.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
-<<<<<<< HEAD
-const delimiterLabel: Record<string, string> = { ",": "comma", ";": "semicolon", "\t": "tab", "|": "| (pipe)" };
-=======
-const delimiterLabel: Record<string, string> = { ",": ", (comma)", ";": "; (semicolon)", "\t": "tab", "|": "| (pipe)" };
->>>>>>> wip/ui
+const delimiterLabel: Readonly<Record<string, string>> = delimiterLabels;
 
 /** How the file was read (detected or chosen) and the controls to read it again differently. */
 export function ReadingOptions() {
