@@ -32,6 +32,8 @@ const memoOutcomes = memoizeLast((table: ParsedTable | null, roles: Readonly<Rec
 export const selectFeatureNames = (s: WorkbenchState): string[] => memoFeatures(s.table, s.roles);
 /** Categorical columns used as features through one-hot indicators, in table order. */
 export const selectOneHotNames = (s: WorkbenchState): string[] => memoOneHot(s.table, s.roles);
+/** True when the recipe has a feature of either kind (numeric, or categorical through one-hot indicators). */
+export const selectHasFeatures = (s: WorkbenchState): boolean => selectFeatureNames(s).length + selectOneHotNames(s).length > 0;
 export const selectOutcomeNames = (s: WorkbenchState): string[] => memoOutcomes(s.table, s.roles);
 export const selectIdColumn = (s: WorkbenchState): string | null => columnsWithRole(s.table, s.roles, "id")[0] ?? null;
 
