@@ -24,6 +24,9 @@ export type Actions = ReturnType<typeof createActions>;
 export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   let latestLoad = 0;
   let latestBuild = 0;
+  // bumped by every action that decides the radius (a typed radius, a request for the default
+  // rule): a default-radius answer applies only if no such action came after its request
+  let radiusIntent = 0;
   const set = store.setState;
 
   interface LoadRequest {
@@ -38,13 +41,13 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     const ticket = ++latestLoad;
     latestBuild++; // any build in flight belongs to the old table
     lastLoad = request;
-    set({ loadStatus: "loading", loadError: null, loadProgress: 0, readOptions: options });
+    set({ loadStatus: "loading", loadError: null, loadNotice: null, loadProgress: 0, readOptions: options });
     const answer = await env.client.send({ type: "load", source: request.tableSource, options }, (progress) => {
       if (ticket === latestLoad) set({ loadProgress: progress.fraction });
     });
     if (ticket !== latestLoad) return;
     if (answer.type === "cancelled") {
-      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null, loadNotice: cancelledNotice(request.source.fileName) });
       return;
     }
     if (answer.type !== "loaded") {
@@ -65,18 +68,24 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
 
   async function suggestRadius(): Promise<void> {
     const loadTicket = latestLoad;
+    const intent = ++radiusIntent;
     const s = store.getState();
     const params = selectCoverParams({ ...s, radius: 1 });
     if (!params) return;
     const { radius: _radius, landmarks: _landmarks, seed: _seed, ...basis } = params;
     const answer = await env.client.send({ type: "suggestRadius", params: basis });
     if (loadTicket !== latestLoad) return; // a newer table has been loaded since
+    if (intent !== radiusIntent) return; // the user set a radius (or asked again) after this request
+    if (answer.type === "cancelled") return;
     if (answer.type === "radius" && answer.radius > 0) {
       set({ radius: answer.radius, suggestedRadius: answer.radius });
       await rebuild();
-    } else if (answer.type === "failed") {
-      set({ build: { ...store.getState().build, state: "failed", error: answer.message } });
+      return;
     }
+    // no default radius: say why and build nothing (a graph of the previous recipe would mislead)
+    latestBuild++;
+    const error = answer.type === "failed" ? answer.message : answer.type === "radius" ? `no default radius for this recipe: ${answer.radius}` : "unexpected answer";
+    set({ suggestedRadius: NaN, result: null, selectedNode: null, regionNodes: [], build: { state: "failed", phase: null, fraction: 0, error, elapsedMs: null } });
   }
 
   async function rebuild(): Promise<void> {
@@ -127,9 +136,10 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       return lastLoad ? load(lastLoad, options) : Promise.resolve();
     },
     cancelLoad(): void {
+      if (store.getState().loadStatus !== "loading") return;
       latestLoad++;
       env.client.cancel("load");
-      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null, loadNotice: cancelledNotice(lastLoad?.source.fileName ?? "the table") });
     },
     rebuild,
     async loadDemo(): Promise<void> {
@@ -153,7 +163,11 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       roles[column] = role;
       return setAndRebuild({ roles });
     },
-    setRadius: (radius: number): Promise<void> => (radius > 0 && Number.isFinite(radius) ? setAndRebuild({ radius }) : Promise.resolve()),
+    setRadius(radius: number): Promise<void> {
+      if (!(radius > 0 && Number.isFinite(radius))) return Promise.resolve();
+      radiusIntent++;
+      return setAndRebuild({ radius });
+    },
     setMetric: (metric: ParamsSlice["metric"]): Promise<void> => {
       set({ metric });
       return suggestRadius();
@@ -178,15 +192,17 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     },
     setColorBy: (colorBy: string | null): void => set({ colorBy, colorLevel: null }),
     setColorLevel: (colorLevel: string | null): void => set({ colorLevel }),
-    /** Opens a node; the region becomes that node alone unless `extend` adds it to (or removes it from) the region. */
-    selectNode(selectedNode: number | null, extend = false): void {
-      if (selectedNode === null) {
+    /**
+     * Opens a node (null closes the pane). The region changes only on purpose: with `toggleRegion`
+     * (shift-click, "Add to region") the node also joins the region, or leaves it if it was in.
+     */
+    selectNode(selectedNode: number | null, toggleRegion = false): void {
+      if (selectedNode === null || !toggleRegion) {
         set({ selectedNode });
         return;
       }
       const region = store.getState().regionNodes;
-      if (!extend) set({ selectedNode, regionNodes: [selectedNode] });
-      else if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
+      if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
       else set({ selectedNode, regionNodes: [...region, selectedNode].sort((a, b) => a - b) });
     },
     clearRegion: (): void => set({ regionNodes: [] }),
@@ -247,6 +263,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     },
   };
 }
+
+const cancelledNotice = (fileName: string): string => `reading ${fileName} was cancelled; the table shown is unchanged`;
 
 const idleStability = { state: "idle", task: null, fraction: 0, error: null } as const;
 
