@@ -73,7 +73,10 @@ export function createWorkerClient(): WorkerClient {
 
   function spawn(): Worker {
     const created = new Worker(new URL("./worker.ts", import.meta.url), { type: "module", name: "shoal-cover" });
-    created.onmessage = (event: MessageEvent<WorkerMessage>) => deliver(event.data);
+    // a message still queued from a worker that was ended belongs to nobody
+    created.onmessage = (event: MessageEvent<WorkerMessage>) => {
+      if (created === worker) deliver(event.data);
+    };
     created.onerror = (event) => {
       for (const [id, entry] of pending) entry.resolve({ id, type: "failed", message: `worker error: ${event.message}` });
       pending.clear();
@@ -91,10 +94,14 @@ export function createWorkerClient(): WorkerClient {
     if (stale.length === 0) return;
     // without shared memory a busy worker cannot be interrupted: end it and start afresh
     worker.terminate();
-    for (const entry of pending.values()) entry.resolve({ id: entry.request.id, type: "cancelled" });
-    pending.clear();
+    for (const entry of stale) {
+      pending.delete(entry.request.id);
+      entry.resolve({ id: entry.request.id, type: "cancelled" });
+    }
     worker = spawn();
     if (table) worker.postMessage({ id: nextId++, type: "adopt", table } satisfies Request);
+    // the other lane's requests (a file load among them) were not cancelled: ask the new worker, in their order
+    for (const entry of [...pending.values()].sort((a, b) => a.request.id - b.request.id)) worker.postMessage(entry.request);
   }
 
   return {
