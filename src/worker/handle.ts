@@ -53,10 +53,9 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
       },
       onProgress: (fraction) => progress("parse", fraction),
       shouldStop: () => isStopped(request),
-    }).then(
-      (outcome) => adoptOutcome(request, outcome),
-      (error: unknown) => failure(request.id, error),
-    );
+    })
+      .then((outcome) => adoptOutcome(request, outcome))
+      .catch((error: unknown) => failure(request.id, error)); // also catches a throw in adoptOutcome (share)
   };
   return (request, report) => {
     let lastReport = -Infinity;
@@ -113,7 +112,8 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
   };
 }
 
-function failure(id: number, error: unknown): Answer {
+/** The answer for an error: `cancelled` for a cancellation, otherwise `failed` with the error's message. */
+export function failure(id: number, error: unknown): Answer {
   if (isCancelled(error)) return { id, type: "cancelled" };
   return { id, type: "failed", message: error instanceof Error ? error.message : String(error) };
 }
