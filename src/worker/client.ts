@@ -68,7 +68,8 @@ export function createWorkerClient(): WorkerClient {
   }
 
   const shared = typeof SharedArrayBuffer !== "undefined" && globalThis.crossOriginIsolated === true;
-  const flags = new Int32Array(shared ? new SharedArrayBuffer(8) : new ArrayBuffer(8));
+  const flagBytes = Object.keys(lane).length * Int32Array.BYTES_PER_ELEMENT; // one slot per lane
+  const flags = new Int32Array(shared ? new SharedArrayBuffer(flagBytes) : new ArrayBuffer(flagBytes));
   let worker = spawn();
 
   function spawn(): Worker {
