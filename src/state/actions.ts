@@ -1,9 +1,9 @@
-import { coverExports, zipExports, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
+import { nodeMembers, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
-import type { TableSource } from "../worker/protocol.ts";
+import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
-import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows } from "./selectors.ts";
+import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
 import { workbenchStore, type WorkbenchStore } from "./store.ts";
@@ -27,6 +27,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   // bumped by every action that decides the radius (a typed radius, a request for the default
   // rule): a default-radius answer applies only if no such action came after its request
   let radiusIntent = 0;
+  let latestStats = 0;
+  let latestExport = 0;
   const set = store.setState;
 
   interface LoadRequest {
@@ -114,6 +116,21 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     }
   }
 
+  /** Asks the worker for the open node's member statistics, unless they are here or on their way. */
+  async function requestNodeStats(): Promise<void> {
+    const s = store.getState();
+    const { result, selectedNode: node, nodeStats } = s;
+    if (!result || node === null || node >= result.landmarks.length) return;
+    if (nodeStats.result === result && nodeStats.node === node && (nodeStats.state === "running" || nodeStats.state === "done")) return;
+    const ticket = ++latestStats;
+    set({ nodeStats: { result, node, state: "running", columns: [], error: null } });
+    // a copy of the node's rows: posting a view would copy the whole member list's buffer
+    const answer = await env.client.send({ type: "nodeStats", rows: nodeMembers(result.members, node).slice(), columns: selectStatsColumns(s) });
+    if (ticket !== latestStats) return;
+    if (answer.type === "summarised") set({ nodeStats: { result, node, state: "done", columns: answer.columns, error: null } });
+    else set({ nodeStats: { result, node, state: "failed", columns: [], error: answerError(answer) } });
+  }
+
   /** A sweep or seed run cancels a running build (a newer compute request wins): it will get no answer. */
   const endRunningBuild = (): void => {
     const { build } = store.getState();
@@ -196,14 +213,12 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
      * Opens a node (null closes the pane). The region changes only on purpose: with `toggleRegion`
      * (shift-click, "Add to region") the node also joins the region, or leaves it if it was in.
      */
-    selectNode(selectedNode: number | null, toggleRegion = false): void {
-      if (selectedNode === null || !toggleRegion) {
-        set({ selectedNode });
-        return;
-      }
+    selectNode(selectedNode: number | null, toggleRegion = false): Promise<void> {
       const region = store.getState().regionNodes;
-      if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
+      if (selectedNode === null || !toggleRegion) set({ selectedNode });
+      else if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
       else set({ selectedNode, regionNodes: [...region, selectedNode].sort((a, b) => a - b) });
+      return requestNodeStats();
     },
     clearRegion: (): void => set({ regionNodes: [] }),
     showStage: (stage: "graph" | "report"): void => set({ stage }),
@@ -248,21 +263,32 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       env.client.cancel("compute");
       set({ stability: idleStability });
     },
-    /** The export zip of the current result, or null when nothing is built. */
-    exportCover(): { fileName: string; bytes: Uint8Array } | null {
+    /**
+     * The export zip of the current result, written by the worker; null when nothing is built, when
+     * a newer export was asked for meanwhile, or on failure (then `exportStatus` says why).
+     */
+    async exportCover(): Promise<{ fileName: string; bytes: Uint8Array } | null> {
       const s = store.getState();
       if (!s.table || !s.result || !s.source) return null;
-      const files = coverExports(s.table, s.result, {
-        fileName: s.source.fileName,
-        fileSize: s.source.fileSize,
-        idColumn: selectIdColumn(s),
-        outcomes: selectOutcomeNames(s),
-      });
+      const ticket = ++latestExport;
+      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s) };
       const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
-      return { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: zipExports(files) };
+      set({ exportStatus: { state: "running", error: null } });
+      const answer = await env.client.send({ type: "exportZip", result: s.result, context });
+      if (ticket !== latestExport) return null;
+      if (answer.type !== "zipped") {
+        set({ exportStatus: { state: "failed", error: answerError(answer) } });
+        return null;
+      }
+      set({ exportStatus: { state: "idle", error: null } });
+      return { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: answer.bytes };
     },
   };
 }
+
+/** What to show for an answer that is not the one asked for. */
+const answerError = (answer: Answer): string =>
+  answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
 
 const cancelledNotice = (fileName: string): string => `reading ${fileName} was cancelled; the table shown is unchanged`;
 

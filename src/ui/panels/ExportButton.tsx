@@ -5,18 +5,23 @@ import { useWorkbench } from "../useWorkbench.ts";
 /** One zip: nodes.csv, members.csv (the node membership table), edges.csv and summary.json. */
 export function ExportButton() {
   const ready = useWorkbench((s) => s.result !== null);
+  const status = useWorkbench((s) => s.exportStatus);
   return (
-    <button
-      type="button"
-      className="primary"
-      disabled={!ready}
-      title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README)"
-      onClick={() => {
-        const file = actions().exportCover();
-        if (file) downloadBytes(file.fileName, file.bytes, "application/zip");
-      }}
-    >
-      Export tables (.zip)
-    </button>
+    <>
+      <button
+        type="button"
+        className="primary"
+        disabled={!ready || status.state === "running"}
+        title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README)"
+        onClick={() => {
+          void actions().exportCover().then((file) => {
+            if (file) downloadBytes(file.fileName, file.bytes, "application/zip");
+          });
+        }}
+      >
+        Export tables (.zip)
+      </button>
+      {status.state === "failed" && <span role="alert" className="error">Export failed: {status.error}</span>}
+    </>
   );
 }
