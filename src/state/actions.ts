@@ -17,6 +17,12 @@ export interface ActionEnvironment {
 
 export type Actions = ReturnType<typeof createActions>;
 
+/** The export zip as the worker wrote it. */
+export interface ExportedFile {
+  readonly fileName: string;
+  readonly bytes: Uint8Array;
+}
+
 /**
  * The only caller of the worker client. Every load and build takes a ticket; an answer whose
  * ticket is older than the latest is dropped, so a quick slider drag never shows a stale graph.
@@ -264,10 +270,11 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       set({ stability: idleStability });
     },
     /**
-     * The export zip of the current result, written by the worker; null when nothing is built, when
-     * a newer export was asked for meanwhile, or on failure (then `exportStatus` says why).
+     * The export zip of the current result, written by the worker and handed to `save` (the page's
+     * download); null when nothing is built, when a newer export was asked for meanwhile, or on
+     * failure, of the worker or of `save` (then `exportStatus` says why).
      */
-    async exportCover(): Promise<{ fileName: string; bytes: Uint8Array } | null> {
+    async exportCover(save: (file: ExportedFile) => void = () => {}): Promise<ExportedFile | null> {
       const s = store.getState();
       if (!s.table || !s.result || !s.source) return null;
       const ticket = ++latestExport;
@@ -280,8 +287,15 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
         set({ exportStatus: { state: "failed", error: answerError(answer) } });
         return null;
       }
+      const file = { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: answer.bytes };
+      try {
+        save(file);
+      } catch (error) {
+        set({ exportStatus: { state: "failed", error: `the zip could not be saved: ${error instanceof Error ? error.message : String(error)}` } });
+        return null;
+      }
       set({ exportStatus: { state: "idle", error: null } });
-      return { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: answer.bytes };
+      return file;
     },
   };
 }

@@ -102,7 +102,17 @@ export function createWorkerClient(): WorkerClient {
     worker = spawn();
     if (table) worker.postMessage({ id: nextId++, type: "adopt", table } satisfies Request);
     // the other lane's requests (a file load among them) were not cancelled: ask the new worker, in their order
-    for (const entry of [...pending.values()].sort((a, b) => a.request.id - b.request.id)) worker.postMessage(entry.request);
+    for (const entry of [...pending.values()].sort((a, b) => a.request.id - b.request.id)) post(entry);
+  }
+
+  /** Posts a pending request; one the browser cannot send (not cloneable, say) is answered "failed" at once. */
+  function post(entry: Pending): void {
+    try {
+      worker.postMessage(entry.request);
+    } catch (error) {
+      pending.delete(entry.request.id);
+      entry.resolve({ id: entry.request.id, type: "failed", message: error instanceof Error ? error.message : String(error) });
+    }
   }
 
   return {
@@ -110,8 +120,9 @@ export function createWorkerClient(): WorkerClient {
       const request = { ...body, id: nextId++ } as Request;
       if (laneOf(request.type) === lane.compute) stopLane(lane.compute, request.id - 1);
       return new Promise<Answer>((resolve) => {
-        pending.set(request.id, { request, resolve, onProgress });
-        worker.postMessage(request);
+        const entry = { request, resolve, onProgress };
+        pending.set(request.id, entry);
+        post(entry);
       });
     },
     cancel(which) {

@@ -95,3 +95,17 @@ describe("actions: the export zip from the worker", () => {
     expect((await newer)?.fileName).toBe("two-cover-r0.5.zip");
   });
 });
+
+describe("actions: saving the export", () => {
+  it("hands the zip to save once; a save that throws sets exportStatus failed 'the zip could not be saved: no downloads here'", async () => {
+    const { store, actions } = await built([]);
+    const saved: string[] = [];
+    await actions.exportCover((file) => void saved.push(file.fileName));
+    expect(saved).toEqual(["two-cover-r0.5.zip"]);
+    const result = await actions.exportCover(() => {
+      throw new Error("no downloads here");
+    });
+    expect(result).toBeNull();
+    expect(store.getState().exportStatus).toEqual({ state: "failed", error: "the zip could not be saved: no downloads here" });
+  });
+});

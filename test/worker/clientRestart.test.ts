@@ -86,3 +86,20 @@ describe("worker client with a Worker and no shared memory: cancelling restarts 
     expect(await load).toMatchObject({ id: 1, type: "loaded" });
   });
 });
+
+describe("worker client with a Worker: a request that cannot be posted", () => {
+  it("answers 'failed' with the browser's message, and a later restart does not post it again", async () => {
+    const client = createWorkerClient();
+    const worker = FakeWorker.made[0]!;
+    const post = worker.postMessage.bind(worker);
+    worker.postMessage = (message: Request) => {
+      if (message.type === "exportZip") throw new Error("could not clone the request");
+      post(message);
+    };
+    const exported = await client.send({ type: "exportZip", result: {} as never, context: { fileName: "t.csv", fileSize: 1, idColumn: null, outcomes: [] } });
+    expect(exported).toEqual({ id: 1, type: "failed", message: "could not clone the request" });
+    void client.send({ type: "build", params });
+    void client.send({ type: "build", params });
+    expect(FakeWorker.made[1]!.sent.map((m) => m.type)).toEqual(["build"]);
+  });
+});

@@ -13,11 +13,7 @@ export function ExportButton() {
         className="primary"
         disabled={!ready || status.state === "running"}
         title="nodes.csv, members.csv, edges.csv and summary.json in one zip (format described in the README)"
-        onClick={() => {
-          void actions().exportCover().then((file) => {
-            if (file) downloadBytes(file.fileName, file.bytes, "application/zip");
-          });
-        }}
+        onClick={() => void actions().exportCover((file) => downloadBytes(file.fileName, file.bytes, "application/zip"))}
       >
         Export tables (.zip)
       </button>
