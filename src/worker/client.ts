@@ -6,7 +6,7 @@ export type RequestBody = Request extends infer R ? (R extends Request ? Omit<R,
 export interface WorkerClient {
   /**
    * Sends a request; progress reports arrive through `onProgress` until the answer resolves.
-   * A compute request (anything but a load) cancels every older compute request still running
+   * A compute request (a build, default radius, sweep or seed run) cancels every older compute request still running
    * or queued: the newest wins, and the older answer is `cancelled`.
    */
   send(body: RequestBody, onProgress?: (progress: Progress) => void): Promise<Answer>;

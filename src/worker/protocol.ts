@@ -26,7 +26,7 @@ export interface SweepRange {
 
 /**
  * Requests from the main thread. Each carries an increasing id; the answer repeats it.
- * "Compute" requests (everything but load and adopt) share one lane: a newer one cancels the older.
+ * "Compute" requests (builds, default radius, sweeps, seed runs) share one lane: a newer one cancels the older.
  */
 export type Request =
   | { readonly id: number; readonly type: "load"; readonly source: TableSource; readonly options: ByteReadOptions }
