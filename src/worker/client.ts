@@ -23,8 +23,8 @@ interface Pending {
 /**
  * Main-thread side of the protocol: numbers requests, routes progress and answers by id, and
  * cancels. In a cross-origin-isolated page cancellation goes through flags in a SharedArrayBuffer
- * that the worker's loops read; elsewhere the client ends the worker, starts a new one and hands
- * it the last table again. Without Web Workers (jsdom tests) the same handler runs in this thread.
+ * that the worker's loops read; elsewhere the client ends the worker, starts a new one, hands it
+ * the last table again and re-sends the requests that were not cancelled. Without Web Workers (jsdom tests) the same handler runs in this thread.
  */
 export function createWorkerClient(): WorkerClient {
   let nextId = 1;
