@@ -1,9 +1,9 @@
-import { coverExports, zipExports, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
+import { nodeMembers, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
-import type { TableSource } from "../worker/protocol.ts";
+import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
-import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows } from "./selectors.ts";
+import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
 import { workbenchStore, type WorkbenchStore } from "./store.ts";
@@ -17,6 +17,12 @@ export interface ActionEnvironment {
 
 export type Actions = ReturnType<typeof createActions>;
 
+/** The export zip as the worker wrote it. */
+export interface ExportedFile {
+  readonly fileName: string;
+  readonly bytes: Uint8Array;
+}
+
 /**
  * The only caller of the worker client. Every load and build takes a ticket; an answer whose
  * ticket is older than the latest is dropped, so a quick slider drag never shows a stale graph.
@@ -24,6 +30,11 @@ export type Actions = ReturnType<typeof createActions>;
 export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   let latestLoad = 0;
   let latestBuild = 0;
+  // bumped by every action that decides the radius (a typed radius, a request for the default
+  // rule): a default-radius answer applies only if no such action came after its request
+  let radiusIntent = 0;
+  let latestStats = 0;
+  let latestExport = 0;
   const set = store.setState;
 
   interface LoadRequest {
@@ -38,13 +49,13 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     const ticket = ++latestLoad;
     latestBuild++; // any build in flight belongs to the old table
     lastLoad = request;
-    set({ loadStatus: "loading", loadError: null, loadProgress: 0, readOptions: options });
+    set({ loadStatus: "loading", loadError: null, loadNotice: null, loadProgress: 0, readOptions: options });
     const answer = await env.client.send({ type: "load", source: request.tableSource, options }, (progress) => {
       if (ticket === latestLoad) set({ loadProgress: progress.fraction });
     });
     if (ticket !== latestLoad) return;
     if (answer.type === "cancelled") {
-      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null, loadNotice: cancelledNotice(request.source.fileName) });
       return;
     }
     if (answer.type !== "loaded") {
@@ -65,18 +76,24 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
 
   async function suggestRadius(): Promise<void> {
     const loadTicket = latestLoad;
+    const intent = ++radiusIntent;
     const s = store.getState();
     const params = selectCoverParams({ ...s, radius: 1 });
     if (!params) return;
     const { radius: _radius, landmarks: _landmarks, seed: _seed, ...basis } = params;
     const answer = await env.client.send({ type: "suggestRadius", params: basis });
     if (loadTicket !== latestLoad) return; // a newer table has been loaded since
+    if (intent !== radiusIntent) return; // the user set a radius (or asked again) after this request
+    if (answer.type === "cancelled") return;
     if (answer.type === "radius" && answer.radius > 0) {
       set({ radius: answer.radius, suggestedRadius: answer.radius });
       await rebuild();
-    } else if (answer.type === "failed") {
-      set({ build: { ...store.getState().build, state: "failed", error: answer.message } });
+      return;
     }
+    // no default radius: say why and build nothing (a graph of the previous recipe would mislead)
+    latestBuild++;
+    const error = answer.type === "failed" ? answer.message : answer.type === "radius" ? `no default radius for this recipe: ${answer.radius}` : "unexpected answer";
+    set({ suggestedRadius: NaN, result: null, selectedNode: null, regionNodes: [], build: { state: "failed", phase: null, fraction: 0, error, elapsedMs: null } });
   }
 
   async function rebuild(): Promise<void> {
@@ -105,6 +122,21 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     }
   }
 
+  /** Asks the worker for the open node's member statistics, unless they are here or on their way. */
+  async function requestNodeStats(): Promise<void> {
+    const s = store.getState();
+    const { result, selectedNode: node, nodeStats } = s;
+    if (!result || node === null || node >= result.landmarks.length) return;
+    if (nodeStats.result === result && nodeStats.node === node && (nodeStats.state === "running" || nodeStats.state === "done")) return;
+    const ticket = ++latestStats;
+    set({ nodeStats: { result, node, state: "running", columns: [], error: null } });
+    // a copy of the node's rows: posting a view would copy the whole member list's buffer
+    const answer = await env.client.send({ type: "nodeStats", rows: nodeMembers(result.members, node).slice(), columns: selectStatsColumns(s) });
+    if (ticket !== latestStats) return;
+    if (answer.type === "summarised") set({ nodeStats: { result, node, state: "done", columns: answer.columns, error: null } });
+    else set({ nodeStats: { result, node, state: "failed", columns: [], error: answerError(answer) } });
+  }
+
   /** A sweep or seed run cancels a running build (a newer compute request wins): it will get no answer. */
   const endRunningBuild = (): void => {
     const { build } = store.getState();
@@ -127,9 +159,10 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       return lastLoad ? load(lastLoad, options) : Promise.resolve();
     },
     cancelLoad(): void {
+      if (store.getState().loadStatus !== "loading") return;
       latestLoad++;
       env.client.cancel("load");
-      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null });
+      set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null, loadNotice: cancelledNotice(lastLoad?.source.fileName ?? "the table") });
     },
     rebuild,
     async loadDemo(): Promise<void> {
@@ -153,7 +186,11 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       roles[column] = role;
       return setAndRebuild({ roles });
     },
-    setRadius: (radius: number): Promise<void> => (radius > 0 && Number.isFinite(radius) ? setAndRebuild({ radius }) : Promise.resolve()),
+    setRadius(radius: number): Promise<void> {
+      if (!(radius > 0 && Number.isFinite(radius))) return Promise.resolve();
+      radiusIntent++;
+      return setAndRebuild({ radius });
+    },
     setMetric: (metric: ParamsSlice["metric"]): Promise<void> => {
       set({ metric });
       return suggestRadius();
@@ -178,16 +215,16 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     },
     setColorBy: (colorBy: string | null): void => set({ colorBy, colorLevel: null }),
     setColorLevel: (colorLevel: string | null): void => set({ colorLevel }),
-    /** Opens a node; the region becomes that node alone unless `extend` adds it to (or removes it from) the region. */
-    selectNode(selectedNode: number | null, extend = false): void {
-      if (selectedNode === null) {
-        set({ selectedNode });
-        return;
-      }
+    /**
+     * Opens a node (null closes the pane). The region changes only on purpose: with `toggleRegion`
+     * (shift-click, "Add to region") the node also joins the region, or leaves it if it was in.
+     */
+    selectNode(selectedNode: number | null, toggleRegion = false): Promise<void> {
       const region = store.getState().regionNodes;
-      if (!extend) set({ selectedNode, regionNodes: [selectedNode] });
+      if (selectedNode === null || !toggleRegion) set({ selectedNode });
       else if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
       else set({ selectedNode, regionNodes: [...region, selectedNode].sort((a, b) => a - b) });
+      return requestNodeStats();
     },
     clearRegion: (): void => set({ regionNodes: [] }),
     showStage: (stage: "graph" | "report"): void => set({ stage }),
@@ -232,21 +269,42 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       env.client.cancel("compute");
       set({ stability: idleStability });
     },
-    /** The export zip of the current result, or null when nothing is built. */
-    exportCover(): { fileName: string; bytes: Uint8Array } | null {
+    /**
+     * The export zip of the current result, written by the worker and handed to `save` (the page's
+     * download); null when nothing is built, when a newer export was asked for meanwhile, or on
+     * failure, of the worker or of `save` (then `exportStatus` says why).
+     */
+    async exportCover(save: (file: ExportedFile) => void = () => {}): Promise<ExportedFile | null> {
       const s = store.getState();
       if (!s.table || !s.result || !s.source) return null;
-      const files = coverExports(s.table, s.result, {
-        fileName: s.source.fileName,
-        fileSize: s.source.fileSize,
-        idColumn: selectIdColumn(s),
-        outcomes: selectOutcomeNames(s),
-      });
+      const ticket = ++latestExport;
+      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s) };
       const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
-      return { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: zipExports(files) };
+      set({ exportStatus: { state: "running", error: null } });
+      const answer = await env.client.send({ type: "exportZip", result: s.result, context });
+      if (ticket !== latestExport) return null;
+      if (answer.type !== "zipped") {
+        set({ exportStatus: { state: "failed", error: answerError(answer) } });
+        return null;
+      }
+      const file = { fileName: `${stem}-cover-r${s.result.params.radius}.zip`, bytes: answer.bytes };
+      try {
+        save(file);
+      } catch (error) {
+        set({ exportStatus: { state: "failed", error: `the zip could not be saved: ${error instanceof Error ? error.message : String(error)}` } });
+        return null;
+      }
+      set({ exportStatus: { state: "idle", error: null } });
+      return file;
     },
   };
 }
+
+/** What to show for an answer that is not the one asked for. */
+const answerError = (answer: Answer): string =>
+  answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
+
+const cancelledNotice = (fileName: string): string => `reading ${fileName} was cancelled; the table shown is unchanged`;
 
 const idleStability = { state: "idle", task: null, fraction: 0, error: null } as const;
 

@@ -1,11 +1,9 @@
 import {
-  columnSummary,
   featureWeights,
   nodeLevelShare,
   nodeMajority,
   nodeMeans,
   nodeMembers,
-  standardisedDifference,
   type ColumnSummary,
   type CoverParams,
   type ParsedTable,
@@ -32,6 +30,8 @@ const memoOutcomes = memoizeLast((table: ParsedTable | null, roles: Readonly<Rec
 export const selectFeatureNames = (s: WorkbenchState): string[] => memoFeatures(s.table, s.roles);
 /** Categorical columns used as features through one-hot indicators, in table order. */
 export const selectOneHotNames = (s: WorkbenchState): string[] => memoOneHot(s.table, s.roles);
+/** True when the recipe has a feature of either kind (numeric, or categorical through one-hot indicators). */
+export const selectHasFeatures = (s: WorkbenchState): boolean => selectFeatureNames(s).length + selectOneHotNames(s).length > 0;
 export const selectOutcomeNames = (s: WorkbenchState): string[] => memoOutcomes(s.table, s.roles);
 export const selectIdColumn = (s: WorkbenchState): string | null => columnsWithRole(s.table, s.roles, "id")[0] ?? null;
 
@@ -84,6 +84,10 @@ export interface NodeDetail {
   readonly size: number;
   readonly landmarkRow: number;
   readonly component: number;
+  /** Whether the worker's member statistics for this node are on their way, here, or failed (with `statsError`). */
+  readonly statsState: "running" | "done" | "failed";
+  readonly statsError: string | null;
+  /** Empty until the statistics are done. */
   readonly columns: readonly {
     readonly name: string;
     readonly role: ColumnRole;
@@ -93,32 +97,28 @@ export interface NodeDetail {
   }[];
 }
 
-const memoOverall = memoizeLast((table: ParsedTable | null) => {
-  const all = table ? Uint32Array.from({ length: table.rows }, (_, i) => i) : new Uint32Array(0);
-  return new Map(table?.columns.filter((c) => c.kind === "numeric").map((c) => [c.name, columnSummary(c.numbers, all)]));
-});
-
-/** Statistics of every numeric column over all rows read (the reference for standardised differences). */
-export const selectOverallSummaries = (s: WorkbenchState): Map<string, ColumnSummary> => memoOverall(s.table);
-
 const memoDetail = memoizeLast(
-  (table: ParsedTable | null, result: WorkbenchState["result"], node: number | null, roles: Readonly<Record<string, ColumnRole>>): NodeDetail | null => {
-    if (!table || !result || node === null || node >= result.landmarks.length) return null;
-    const rows = nodeMembers(result.members, node);
-    const overall = memoOverall(table);
-    const columns = table.columns
-      .filter((c) => c.kind === "numeric" && roles[c.name] !== "ignore")
-      .map((c) => {
-        const summary = columnSummary(c.numbers, rows);
-        const whole = overall.get(c.name)!;
-        return { name: c.name, role: roles[c.name] ?? "ignore", summary, standardisedDifference: standardisedDifference(summary.mean, whole.mean, whole.sd) };
-      });
-    return { node, size: rows.length, landmarkRow: result.landmarks[node]!, component: result.component[node]!, columns };
+  (result: WorkbenchState["result"], node: number | null, roles: Readonly<Record<string, ColumnRole>>, stats: WorkbenchState["nodeStats"]): NodeDetail | null => {
+    if (!result || node === null || node >= result.landmarks.length) return null;
+    const size = result.members.offsets[node + 1]! - result.members.offsets[node]!;
+    const own = stats.result === result && stats.node === node;
+    const statsState = own && stats.state !== "idle" ? stats.state : "running";
+    const columns = own && stats.state === "done"
+      ? stats.columns.filter((c) => roles[c.name] !== "ignore").map((c) => ({ ...c, role: roles[c.name] ?? "ignore" }))
+      : [];
+    return { node, size, landmarkRow: result.landmarks[node]!, component: result.component[node]!, statsState, statsError: own ? stats.error : null, columns };
   },
 );
 
-/** Member statistics of the selected node, per numeric column (features and outcomes first as in the table). */
-export const selectNodeDetail = (s: WorkbenchState): NodeDetail | null => memoDetail(s.table, s.result, s.selectedNode, s.roles);
+/**
+ * The selected node and its member statistics per numeric column (features and outcomes, in table
+ * order) as the worker computed them; `statsState` says whether they have arrived.
+ */
+export const selectNodeDetail = (s: WorkbenchState): NodeDetail | null => memoDetail(s.result, s.selectedNode, s.roles, s.nodeStats);
+
+/** Numeric columns whose member statistics a node pane shows: every numeric column not ignored, in table order. */
+export const selectStatsColumns = (s: WorkbenchState): string[] =>
+  s.table ? s.table.columns.filter((c) => c.kind === "numeric" && s.roles[c.name] !== "ignore").map((c) => c.name) : [];
 
 const memoRegionRows = memoizeLast((result: WorkbenchState["result"], regionNodes: readonly number[]): Uint32Array | null => {
   if (!result || regionNodes.length === 0) return null;

@@ -6,7 +6,7 @@ export type RequestBody = Request extends infer R ? (R extends Request ? Omit<R,
 export interface WorkerClient {
   /**
    * Sends a request; progress reports arrive through `onProgress` until the answer resolves.
-   * A compute request (anything but a load) cancels every older compute request still running
+   * A compute request (a build, default radius, sweep or seed run) cancels every older compute request still running
    * or queued: the newest wins, and the older answer is `cancelled`.
    */
   send(body: RequestBody, onProgress?: (progress: Progress) => void): Promise<Answer>;
@@ -23,8 +23,8 @@ interface Pending {
 /**
  * Main-thread side of the protocol: numbers requests, routes progress and answers by id, and
  * cancels. In a cross-origin-isolated page cancellation goes through flags in a SharedArrayBuffer
- * that the worker's loops read; elsewhere the client ends the worker, starts a new one and hands
- * it the last table again. Without Web Workers (jsdom tests) the same handler runs in this thread.
+ * that the worker's loops read; elsewhere the client ends the worker, starts a new one, hands it
+ * the last table again and re-sends the requests that were not cancelled. Without Web Workers (jsdom tests) the same handler runs in this thread.
  */
 export function createWorkerClient(): WorkerClient {
   let nextId = 1;
@@ -68,12 +68,16 @@ export function createWorkerClient(): WorkerClient {
   }
 
   const shared = typeof SharedArrayBuffer !== "undefined" && globalThis.crossOriginIsolated === true;
-  const flags = new Int32Array(shared ? new SharedArrayBuffer(8) : new ArrayBuffer(8));
+  const flagBytes = Object.keys(lane).length * Int32Array.BYTES_PER_ELEMENT; // one slot per lane
+  const flags = new Int32Array(shared ? new SharedArrayBuffer(flagBytes) : new ArrayBuffer(flagBytes));
   let worker = spawn();
 
   function spawn(): Worker {
     const created = new Worker(new URL("./worker.ts", import.meta.url), { type: "module", name: "shoal-cover" });
-    created.onmessage = (event: MessageEvent<WorkerMessage>) => deliver(event.data);
+    // a message still queued from a worker that was ended belongs to nobody
+    created.onmessage = (event: MessageEvent<WorkerMessage>) => {
+      if (created === worker) deliver(event.data);
+    };
     created.onerror = (event) => {
       for (const [id, entry] of pending) entry.resolve({ id, type: "failed", message: `worker error: ${event.message}` });
       pending.clear();
@@ -91,10 +95,24 @@ export function createWorkerClient(): WorkerClient {
     if (stale.length === 0) return;
     // without shared memory a busy worker cannot be interrupted: end it and start afresh
     worker.terminate();
-    for (const entry of pending.values()) entry.resolve({ id: entry.request.id, type: "cancelled" });
-    pending.clear();
+    for (const entry of stale) {
+      pending.delete(entry.request.id);
+      entry.resolve({ id: entry.request.id, type: "cancelled" });
+    }
     worker = spawn();
     if (table) worker.postMessage({ id: nextId++, type: "adopt", table } satisfies Request);
+    // the other lane's requests (a file load among them) were not cancelled: ask the new worker, in their order
+    for (const entry of [...pending.values()].sort((a, b) => a.request.id - b.request.id)) post(entry);
+  }
+
+  /** Posts a pending request; one the browser cannot send (not cloneable, say) is answered "failed" at once. */
+  function post(entry: Pending): void {
+    try {
+      worker.postMessage(entry.request);
+    } catch (error) {
+      pending.delete(entry.request.id);
+      entry.resolve({ id: entry.request.id, type: "failed", message: error instanceof Error ? error.message : String(error) });
+    }
   }
 
   return {
@@ -102,8 +120,9 @@ export function createWorkerClient(): WorkerClient {
       const request = { ...body, id: nextId++ } as Request;
       if (laneOf(request.type) === lane.compute) stopLane(lane.compute, request.id - 1);
       return new Promise<Answer>((resolve) => {
-        pending.set(request.id, { request, resolve, onProgress });
-        worker.postMessage(request);
+        const entry = { request, resolve, onProgress };
+        pending.set(request.id, entry);
+        post(entry);
       });
     },
     cancel(which) {

@@ -1,6 +1,7 @@
 import {
   buildCover,
   Cancelled,
+  coverExports,
   figureBuffers,
   isCancelled,
   radiusSweep,
@@ -12,7 +13,9 @@ import {
   type ByteSource,
   type ParsedTable,
   type ReadOutcome,
+  zipExports,
 } from "../core/index.ts";
+import { createNodeStatistics } from "./createNodeStatistics.ts";
 import { laneOf, type Answer, type Progress, type Request } from "./protocol.ts";
 
 export type Handler = (request: Request, report: (progress: Progress) => void) => Answer | Promise<Answer>;
@@ -35,13 +38,17 @@ export interface HandlerOptions {
  */
 export function createHandler({ now = Date.now, isStopped = () => false, progressInterval = 50, share = (t) => t }: HandlerOptions = {}): Handler {
   let table: ParsedTable | null = null;
+  let nodeStatistics: ReturnType<typeof createNodeStatistics> | null = null; // whole-column summaries of `table`, kept
   const loaded = (): ParsedTable => {
     if (!table) throw new Error("no table is loaded");
     return table;
   };
+  const keep = (next: ParsedTable): ParsedTable => {
+    nodeStatistics = null;
+    return (table = next);
+  };
   const adoptOutcome = (request: Extract<Request, { type: "load" }>, outcome: ReadOutcome): Answer => {
-    table = share(outcome.table);
-    return { id: request.id, type: "loaded", table, report: outcome.report };
+    return { id: request.id, type: "loaded", table: keep(share(outcome.table)), report: outcome.report };
   };
   // text in memory is read at once (so the answer is synchronous); a file is streamed
   const load = (request: Extract<Request, { type: "load" }>, progress: (phase: Progress["phase"], fraction: number) => void): Answer | Promise<Answer> => {
@@ -53,10 +60,9 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
       },
       onProgress: (fraction) => progress("parse", fraction),
       shouldStop: () => isStopped(request),
-    }).then(
-      (outcome) => adoptOutcome(request, outcome),
-      (error: unknown) => failure(request.id, error),
-    );
+    })
+      .then((outcome) => adoptOutcome(request, outcome))
+      .catch((error: unknown) => failure(request.id, error)); // also catches a throw in adoptOutcome (share)
   };
   return (request, report) => {
     let lastReport = -Infinity;
@@ -73,7 +79,7 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
         case "load":
           return load(request, progress);
         case "adopt":
-          table = request.table;
+          keep(request.table);
           return { id: request.id, type: "adopted" };
         case "suggestRadius":
           return { id: request.id, type: "radius", radius: suggestRadius(loaded(), request.params) };
@@ -104,6 +110,11 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           });
           return { id: request.id, type: "seeded", stability };
         }
+        case "nodeStats":
+          nodeStatistics ??= createNodeStatistics(loaded());
+          return { id: request.id, type: "summarised", columns: nodeStatistics(request.rows, request.columns) };
+        case "exportZip":
+          return { id: request.id, type: "zipped", bytes: zipExports(coverExports(loaded(), request.result, request.context)) };
         default:
           return assertNever(request);
       }
@@ -113,7 +124,8 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
   };
 }
 
-function failure(id: number, error: unknown): Answer {
+/** The answer for an error: `cancelled` for a cancellation, otherwise `failed` with the error's message. */
+export function failure(id: number, error: unknown): Answer {
   if (isCancelled(error)) return { id, type: "cancelled" };
   return { id, type: "failed", message: error instanceof Error ? error.message : String(error) };
 }
@@ -136,6 +148,7 @@ export function transferables(answer: Answer): ArrayBuffer[] {
   if (answer.type === "swept") {
     return [...new Set([...figureBuffers(answer.sweep.figures), ...(answer.region ? [answer.region.jaccard.buffer as ArrayBuffer] : [])])];
   }
+  if (answer.type === "zipped") return [answer.bytes.buffer as ArrayBuffer];
   if (answer.type === "seeded") return answer.stability.regionShare ? [answer.stability.regionShare.buffer as ArrayBuffer] : [];
   if (answer.type !== "built") return [];
   const { result } = answer;

@@ -2,7 +2,9 @@ import type {
   BuildPhase,
   ByteReadOptions,
   CoverParams,
+  ColumnSummary,
   CoverResult,
+  ExportContext,
   ParsedTable,
   RadiusBasis,
   RadiusSweep,
@@ -24,7 +26,7 @@ export interface SweepRange {
 
 /**
  * Requests from the main thread. Each carries an increasing id; the answer repeats it.
- * "Compute" requests (everything but load and adopt) share one lane: a newer one cancels the older.
+ * "Compute" requests (builds, default radius, sweeps, seed runs) share one lane: a newer one cancels the older.
  */
 export type Request =
   | { readonly id: number; readonly type: "load"; readonly source: TableSource; readonly options: ByteReadOptions }
@@ -34,13 +36,29 @@ export type Request =
   | { readonly id: number; readonly type: "build"; readonly params: CoverParams }
   /** A radius sweep; with a selection (parsed-table rows), also its matched region per radius. */
   | { readonly id: number; readonly type: "sweep"; readonly params: SweepParams; readonly range: SweepRange; readonly selection: Uint32Array | null }
-  | { readonly id: number; readonly type: "seeds"; readonly params: CoverParams; readonly seeds: number; readonly selection: Uint32Array | null };
+  | { readonly id: number; readonly type: "seeds"; readonly params: CoverParams; readonly seeds: number; readonly selection: Uint32Array | null }
+  /** Statistics of one node's member rows (parsed-table rows) in the named numeric columns, against all rows. */
+  | { readonly id: number; readonly type: "nodeStats"; readonly rows: Uint32Array; readonly columns: readonly string[] }
+  /** The export zip of a result built on the worker's table. */
+  | { readonly id: number; readonly type: "exportZip"; readonly result: CoverResult; readonly context: ExportContext };
 
 export type RequestType = Request["type"];
 
-/** Lanes of cancellation: index into the shared cancel flags. */
-export const lane = { compute: 0, load: 1 } as const;
-export const laneOf = (type: RequestType): number => (type === "load" || type === "adopt" ? lane.load : lane.compute);
+/**
+ * Lanes of cancellation: index into the shared cancel flags. "view" requests (node statistics,
+ * the export) read the table for what is on screen: they neither cancel nor are cancelled by a build.
+ */
+export const lane = { compute: 0, load: 1, view: 2 } as const;
+export const laneOf = (type: RequestType): number =>
+  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" ? lane.view : lane.compute;
+
+/** One column's statistics over a node's member rows. */
+export interface NodeColumnStats {
+  readonly name: string;
+  readonly summary: ColumnSummary;
+  /** (node mean − mean of all rows) / sd of all rows. */
+  readonly standardisedDifference: number;
+}
 
 /** Final answers. `load` returns the parsed table so the main thread can colour, summarise and export. */
 export type Answer =
@@ -50,6 +68,9 @@ export type Answer =
   | { readonly id: number; readonly type: "built"; readonly result: CoverResult }
   | { readonly id: number; readonly type: "swept"; readonly sweep: RadiusSweep; readonly region: RegionTrack | null }
   | { readonly id: number; readonly type: "seeded"; readonly stability: SeedStability }
+  | { readonly id: number; readonly type: "summarised"; readonly columns: readonly NodeColumnStats[] }
+  /** The zip's bytes, transferred. */
+  | { readonly id: number; readonly type: "zipped"; readonly bytes: Uint8Array }
   | { readonly id: number; readonly type: "cancelled" }
   | { readonly id: number; readonly type: "failed"; readonly message: string };
 

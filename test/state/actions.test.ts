@@ -131,27 +131,27 @@ describe("actions: builds", () => {
     expect(store.getState().seed).toBe(1);
   });
 
-  it("selectNode and setColorBy only set state", async () => {
+  it("selectNode sends only a nodeStats request (no build) and setColorBy only sets state", async () => {
     const { store, actions, client } = setup(inThreadClient());
     await actions.loadText(csv, source);
     const sent = client.sent.length;
-    actions.selectNode(0);
+    await actions.selectNode(0);
     actions.setColorBy("y");
     expect(store.getState()).toMatchObject({ selectedNode: 0, colorBy: "y" });
-    expect(client.sent.length).toBe(sent);
+    expect(client.sent.slice(sent).map((b) => b.type)).toEqual(["nodeStats"]);
   });
 });
 
 describe("actions: exportCover", () => {
-  it("returns null before anything is built", () => {
-    expect(setup(inThreadClient()).actions.exportCover()).toBeNull();
+  it("returns null before anything is built", async () => {
+    expect(await setup(inThreadClient()).actions.exportCover()).toBeNull();
   });
 
   it("returns a zip named after the file and radius whose members.csv carries the id column", async () => {
     const { store, actions } = setup(inThreadClient());
     await actions.loadText(csv, source);
     await actions.setRadius(0.5);
-    const exported = actions.exportCover()!;
+    const exported = (await actions.exportCover())!;
     expect(exported.fileName).toBe("plants-cover-r0.5.zip");
     const files = unzipSync(exported.bytes);
     const members = strFromU8(files["members.csv"]!).split("\n");

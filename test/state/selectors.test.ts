@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildCover, parseCsvText } from "../../src/core/index.ts";
+import { buildCover, nodeMembers, parseCsvText } from "../../src/core/index.ts";
 import {
   selectCoverParams,
   selectFeatureNames,
@@ -7,7 +7,9 @@ import {
   selectNodeColorValues,
   selectNodeDetail,
   selectOutcomeNames,
+  selectStatsColumns,
 } from "../../src/state/selectors.ts";
+import { createNodeStatistics } from "../../src/worker/createNodeStatistics.ts";
 import { createWorkbenchStore, type WorkbenchState } from "../../src/state/store.ts";
 import { assertClose } from "../assertClose.ts";
 
@@ -62,13 +64,25 @@ describe("selectors", () => {
     expect(selectNodeColorValues(state({ colorBy: "y" }))).toBeNull();
   });
 
-  it("detail the selected node: size, landmark row, component and per-column summaries of non-ignored numeric columns", () => {
+  it("detail the selected node: size 3, landmark row 2, component 0, and the worker's statistics of that result and node with their roles", () => {
     const result = buildCover(table, selectCoverParams(state())!);
-    const detail = selectNodeDetail(state({ result, selectedNode: 1 }));
-    expect(detail).toMatchObject({ node: 1, size: 3, landmarkRow: 2, component: 0 }); // worked by hand: ball {1, 2, 3}
+    expect(selectStatsColumns(state())).toEqual(["x", "y"]); // the numeric columns not ignored, in table order
+    const columns = createNodeStatistics(table)(nodeMembers(result.members, 1), ["x", "y"]);
+    const detail = selectNodeDetail(state({ result, selectedNode: 1, nodeStats: { result, node: 1, state: "done", columns, error: null } }));
+    expect(detail).toMatchObject({ node: 1, size: 3, landmarkRow: 2, component: 0, statsState: "done", statsError: null }); // worked by hand: ball {1, 2, 3}
     expect(detail!.columns.map((c) => [c.name, c.role])).toEqual([["x", "feature"], ["y", "outcome"]]);
     assertClose(detail!.columns[0]!.summary.mean, 2); // worked by hand: (1 + 2 + 3)/3
     expect(detail!.columns[1]!.summary).toMatchObject({ count: 2, missing: 1 }); // worked by hand: row d has no y
+  });
+
+  it("show no statistics of another node or an older result: the detail is 'running' with no columns until the node's own arrive", () => {
+    const result = buildCover(table, selectCoverParams(state())!);
+    const columns = createNodeStatistics(table)(nodeMembers(result.members, 0), ["x", "y"]);
+    const otherNode = selectNodeDetail(state({ result, selectedNode: 1, nodeStats: { result, node: 0, state: "done", columns, error: null } }));
+    expect(otherNode).toMatchObject({ node: 1, statsState: "running", columns: [] });
+    const older = buildCover(table, selectCoverParams(state())!);
+    const otherResult = selectNodeDetail(state({ result, selectedNode: 0, nodeStats: { result: older, node: 0, state: "done", columns, error: null } }));
+    expect(otherResult).toMatchObject({ node: 0, statsState: "running", columns: [] });
   });
 
   it("give no detail without a selection or for a node number past the last node", () => {

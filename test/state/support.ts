@@ -83,3 +83,32 @@ export function queuedClient() {
     },
   };
 }
+
+/**
+ * A client that answers at once except requests of the `held` types, which wait until
+ * `release(type)` answers the oldest waiting one of that type (as the worker would have, or with
+ * the answer the test gives).
+ */
+export function parkingClient(held: readonly Request["type"][]) {
+  const handle = createHandler({ now: () => 0 });
+  const parked: { request: Request; resolve: (answer: Answer) => void }[] = [];
+  const sent: RequestBody[] = [];
+  let id = 0;
+  const client: WorkerClient = {
+    cancel() {},
+    send(body, onProgress) {
+      sent.push(body);
+      const request = { ...body, id: ++id } as Request;
+      if (!held.includes(request.type)) return Promise.resolve().then(() => handle(request, (p) => onProgress?.(p)));
+      return new Promise<Answer>((resolve) => parked.push({ request, resolve }));
+    },
+  };
+  const release = async (type: Request["type"], answer?: (request: Request) => Answer): Promise<void> => {
+    const k = parked.findIndex((entry) => entry.request.type === type);
+    if (k < 0) throw new Error(`no ${type} request is waiting`);
+    const [entry] = parked.splice(k, 1);
+    entry!.resolve(answer ? answer(entry!.request) : await handle(entry!.request, () => {}));
+    await new Promise((resolve) => setTimeout(resolve, 0)); // let the awaiting action run
+  };
+  return { client, sent, parked, release };
+}

@@ -40,6 +40,7 @@ it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, membe
   // outlive the test (user-event's own waits need real timers, so this click is a plain event)
   vi.useFakeTimers({ toFake: ["setTimeout", "clearTimeout"] });
   fireEvent.click(screen.getByRole("button", { name: "Export tables (.zip) contains row-level data" }));
+  await vi.waitFor(() => expect(links).toHaveLength(1)); // the worker writes the zip
 
   expect(links).toHaveLength(1);
   expect(links[0]!.download).toBe(`small-cover-r${smallRadius}.zip`);

@@ -53,7 +53,9 @@ it("the swept list counts components, not b0, in each radius's line", async () =
 it("with a region selected, the sweep's notes explain region match as the Jaccard index, shared rows over rows in either", async () => {
   render(<StabilityPane />);
   await loadSmallTable();
-  act(() => actions().selectNode(0, true));
+  await act(async () => {
+    await actions().selectNode(0, true);
+  });
   await act(async () => {
     await actions().runSweep();
   });

@@ -60,3 +60,11 @@ describe("worker: loading a file", () => {
     if (answer.type === "failed") expect(answer.message).toMatch(/^the file is not valid utf-8 near byte \d+: choose windows-1252/);
   });
 });
+
+describe("worker: a file load that fails after reading", () => {
+  it("a throw while keeping the read table (share) answers 'failed' with its message instead of rejecting", async () => {
+    const handle = createHandler({ share: () => { throw new Error("out of shared memory"); } });
+    const answer = await handle({ id: 1, type: "load", source: { kind: "file", file: new Blob(["x\n1\n2\n"]) }, options: {} }, () => {});
+    expect(answer).toEqual({ id: 1, type: "failed", message: "out of shared memory" });
+  });
+});

@@ -18,6 +18,8 @@ export interface DataSlice {
   /** Share of the file read while loading. */
   readonly loadProgress: number;
   readonly loadError: string | null;
+  /** A note about the last load that is not a failure (it was cancelled), or null. */
+  readonly loadNotice: string | null;
 }
 
-export const initialData: DataSlice = { source: null, table: null, report: null, readOptions: {}, loadStatus: "idle", loadProgress: 0, loadError: null };
+export const initialData: DataSlice = { source: null, table: null, report: null, readOptions: {}, loadStatus: "idle", loadProgress: 0, loadError: null, loadNotice: null };

@@ -1,13 +1,13 @@
 import { formatCount, plural } from "../format.ts";
 import { actions } from "../../state/actions.ts";
-import { selectFeatureNames } from "../../state/selectors.ts";
+import { selectHasFeatures } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
 /** Progress while the worker builds, then the graph's counts and every row left out. */
 export function BuildSummary() {
   const build = useWorkbench((s) => s.build);
   const result = useWorkbench((s) => s.result);
-  const noFeatures = useWorkbench((s) => s.table !== null && selectFeatureNames(s).length === 0);
+  const noFeatures = useWorkbench((s) => s.table !== null && !selectHasFeatures(s));
   return (
     <section className="build-summary" aria-live="polite">
       {build.state === "running" && (

@@ -21,6 +21,8 @@ export function NodePane() {
       <button type="button" onClick={() => actions().selectNode(detail.node, true)}>
         {inRegion ? "Remove from region" : "Add to region"}
       </button>
+      {detail.statsState === "running" && <p className="note">Computing member statistics…</p>}
+      {detail.statsState === "failed" && <p role="alert" className="error">Member statistics failed: {detail.statsError}</p>}
       <table>
         <thead>
           <tr>

@@ -10,6 +10,7 @@ export function SourceBar() {
   const rows = useWorkbench((s) => s.table?.rows ?? 0);
   const loadStatus = useWorkbench((s) => s.loadStatus);
   const loadError = useWorkbench((s) => s.loadError);
+  const loadNotice = useWorkbench((s) => s.loadNotice);
   const loadProgress = useWorkbench((s) => s.loadProgress);
   const stage = useWorkbench((s) => s.stage);
   const input = useRef<HTMLInputElement>(null);
@@ -34,6 +35,7 @@ export function SourceBar() {
             )}
           </span>
         )}
+        {loadNotice && <span className="note" data-testid="load-notice">{loadNotice}</span>}
         {loadStatus !== "loading" && source && (
           <span>
             <strong>{source.fileName}</strong> · {formatCount(rows)} rows

@@ -20,7 +20,7 @@ export function StabilityPane() {
       <p className="note">
         {regionSize > 0
           ? `Region: ${plural(regionSize, "node")} (shift-click nodes to add or remove); the sweep tracks how well it is matched at each radius.`
-          : "Select a region (click a node, shift-click to add more) to track it across radii and seeds."}
+          : "Select a region (shift-click nodes, or \"Add to region\" in a node's pane) to track it across radii and seeds."}
       </p>
       <div className="stability-actions">
         <button type="button" onClick={() => void actions().runSweep()} disabled={status.state === "running"}>Sweep radii</button>
