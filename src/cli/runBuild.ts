@@ -1,4 +1,4 @@
-import { buildCover, coverExports, delimiterNames, featureWeights, suggestRadius, type CoverParams, type ReadingRecord } from "../core/index.ts";
+import { buildCover, coverExports, featureWeights, readingRecord, suggestRadius, type CoverParams } from "../core/index.ts";
 import { resolveFeatures } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readInput } from "./readInput.ts";
@@ -27,8 +27,7 @@ export async function runBuild(command: BuildCommand): Promise<string> {
   const started = performance.now();
   const result = buildCover(table, params, { now: () => performance.now() });
   const elapsed = performance.now() - started;
-  const format = report.format;
-  const reading: ReadingRecord = format.kind === "parquet" ? { format: "parquet" } : { format: "delimited", delimiter: delimiterNames[format.delimiter], decimal: format.decimal, ragged: command.read.ragged ?? "reject" };
+  const reading = readingRecord(report.format, command.read.ragged);
   const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading });
   const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
 

@@ -74,6 +74,7 @@ export { quantileSorted } from "./stats/quantileSorted.ts";
 export { columnSummary, type ColumnSummary } from "./stats/columnSummary.ts";
 export { standardisedDifference } from "./stats/standardisedDifference.ts";
 export { coverExports, exportSchemaVersion, type CoverExports, type ExportContext, type ReadingRecord } from "./export/coverExports.ts";
+export { readingRecord } from "./export/readingRecord.ts";
 export { zipExports } from "./export/zipExports.ts";
 export { csvNumber, csvText, csvLine } from "./export/csvCell.ts";
 export { randomSource, shuffledOrder } from "./random.ts";

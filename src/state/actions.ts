@@ -1,4 +1,4 @@
-import { nodeMembers, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
+import { nodeMembers, readingRecord, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
 import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
@@ -278,7 +278,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const s = store.getState();
       if (!s.table || !s.result || !s.source) return null;
       const ticket = ++latestExport;
-      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s) };
+      const reading = s.report ? { reading: readingRecord(s.report.format, s.readOptions.ragged) } : {};
+      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s), ...reading };
       const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
       set({ exportStatus: { state: "running", error: null } });
       const answer = await env.client.send({ type: "exportZip", result: s.result, context });
