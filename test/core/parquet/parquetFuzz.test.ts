@@ -1,0 +1,112 @@
+import { describe, expect, it } from "vitest";
+import { readParquet } from "../../../src/core/parquet/readParquet.ts";
+import { randomSource } from "../../../src/core/random.ts";
+import { parquetLayout, rewriteParquet, intEdit, type IntField } from "./parquetSurgery.ts";
+import { bufferOf, recompressed, snappyFixture } from "./parquetVariants.ts";
+import { watchAllocations } from "./watchAllocations.ts";
+
+// Damaged and hostile variants of the mixed-columns fixture in four codecs, made by a seeded
+// generator: each must end in a table or in one plain Error with a lowercase message, within a
+// second, without any single allocation past a stated bound.
+
+const bases = [
+  { codec: "SNAPPY", bytes: snappyFixture },
+  { codec: "GZIP", bytes: recompressed("GZIP") },
+  { codec: "ZSTD", bytes: recompressed("ZSTD") },
+  { codec: "UNCOMPRESSED", bytes: recompressed("UNCOMPRESSED") },
+];
+
+type Random = () => number;
+const pick = <T>(random: Random, items: readonly T[]): T => items[Math.floor(random() * items.length)]!;
+const below = (random: Random, n: number): number => Math.floor(random() * n);
+
+/** Values a liar would declare: huge, negative, just past the truth, or zero. */
+function lie(random: Random, truth: bigint): bigint {
+  return pick(random, [2n ** 31n - 1n, 2n ** 30n, 2n ** 53n + 1n, 2n ** 62n, -1n, -(2n ** 31n), truth * 1000n + 7n, truth + 1n, truth - 1n, 0n, 1_000_000n]);
+}
+
+const mutations = {
+  truncate: (random: Random, bytes: Uint8Array) => bytes.slice(0, below(random, bytes.length)),
+  cutData: (random: Random, bytes: Uint8Array) => {
+    const footerStart = parquetLayout(bytes).footerStart;
+    const from = 4 + below(random, footerStart - 4);
+    return Uint8Array.from([...bytes.subarray(0, from), ...bytes.subarray(from + 1 + below(random, 40))]);
+  },
+  flipBytes: (random: Random, bytes: Uint8Array) => {
+    const out = bytes.slice();
+    const inFooter = random() < 0.5;
+    const footerStart = parquetLayout(bytes).footerStart;
+    for (let k = 1 + below(random, 6); k > 0; --k) {
+      const at = inFooter ? footerStart + below(random, out.length - 8 - footerStart) : below(random, out.length);
+      out[at]! ^= 1 + below(random, 255);
+    }
+    return out;
+  },
+  footerLength: (random: Random, bytes: Uint8Array) => {
+    const out = bytes.slice();
+    const n = out.length;
+    const length = pick(random, [0, 1, n - 12, n - 11, n - 8, n, 2 ** 32 - 1, 2 ** 31, below(random, n), below(random, 2 ** 32)]);
+    new DataView(out.buffer).setUint32(n - 8, length, true);
+    return out;
+  },
+  footerSize: (random: Random, bytes: Uint8Array) => {
+    const layout = parquetLayout(bytes);
+    const sizes = layout.footer.filter((f) => /^(3|4\.\d+\.3|4\.\d+\.1\.\d+\.3\.(5|6|7|9|11)|2\.\d+\.(2|5))$/.test(f.path));
+    const field = pick(random, sizes);
+    return rewriteParquet(layout, [], new Map([[field.path, lie(random, field.value)]]));
+  },
+  pageSize: (random: Random, bytes: Uint8Array) => {
+    const layout = parquetLayout(bytes);
+    const fields: IntField[] = layout.pages.flatMap((p) => p.fields.filter((f) => /^(2|3|8\.(1|2|3|5|6))$/.test(f.path)));
+    const field = pick(random, fields);
+    return rewriteParquet(layout, [intEdit(field, lie(random, field.value))]);
+  },
+  codec: (random: Random, bytes: Uint8Array) => {
+    const layout = parquetLayout(bytes);
+    const codecs = layout.footer.filter((f) => /^4\.\d+\.1\.\d+\.3\.4$/.test(f.path));
+    const chosen = random() < 0.5 ? codecs : [pick(random, codecs)];
+    const id = BigInt(pick(random, [0, 1, 2, 3, 4, 5, 6, 7, 8, 99, -1])); // 0–7 are the format's codecs (Apache Parquet format, CompressionCodec)
+    return rewriteParquet(layout, [], new Map(chosen.map((f) => [f.path, id])));
+  },
+};
+type Mutation = keyof typeof mutations;
+
+describe("readParquet: fuzz", () => {
+  it("600 damaged files (7 kinds × 4 codecs, seed 2026) each end in a table or one plain lowercase Error within 1 s; no allocation passes 16 MiB", async () => {
+    const random = randomSource(2026);
+    const outcomes = new Map<string, number>();
+    const watch = watchAllocations();
+    let slowest = 0;
+    try {
+      for (let i = 0; i < 600; ++i) {
+        const kind = pick(random, Object.keys(mutations) as Mutation[]);
+        const base = pick(random, bases);
+        const bytes = mutations[kind](random, base.bytes);
+        const started = performance.now();
+        let outcome: string;
+        try {
+          const { table } = await readParquet(bufferOf(bytes));
+          outcome = `table of ${table.rows} rows`;
+        } catch (error) {
+          expect(error, `${kind} ${base.codec} #${i}`).toBeInstanceOf(Error);
+          expect((error as Error).constructor, `${kind} ${base.codec} #${i}: ${String(error)}`).toBe(Error); // not a RangeError or TypeError from deep inside
+          expect((error as Error).message).toMatch(/^[a-z][^\n]*$/);
+          outcome = (error as Error).message.replace(/-?\d+/g, "N");
+        }
+        const elapsed = performance.now() - started;
+        slowest = Math.max(slowest, elapsed);
+        expect(elapsed, `${kind} ${base.codec} #${i} took ${elapsed} ms`).toBeLessThan(1000); // the stated bound: one second
+        outcomes.set(`${kind}: ${outcome}`, (outcomes.get(`${kind}: ${outcome}`) ?? 0) + 1);
+      }
+    } finally {
+      watch.stop();
+    }
+    expect(watch.largest()).toBeLessThanOrEqual(2 ** 24); // 16 MiB: the files are under 2 kB, pages decompress to at most the 1 MiB floor
+    const seen = [...outcomes.keys()].join("\n");
+    expect(seen).toMatch(/unsupported parquet codec: /);
+    expect(seen).toMatch(/invalid parquet footer length: /);
+    expect(seen).toMatch(/bytes decompressed \(the limit is /);
+    expect(seen).toMatch(/: table of /);
+    console.log(`slowest file ${slowest.toFixed(1)} ms; largest allocation ${watch.largest()} bytes\n${[...outcomes].sort().map(([k, v]) => `${v}\t${k}`).join("\n")}`);
+  }, 120_000);
+});
