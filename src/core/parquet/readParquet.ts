@@ -33,8 +33,8 @@ export interface ParquetOptions {
 export async function readParquet(buffer: ArrayBuffer, options: ParquetOptions = {}): Promise<ReadOutcome> {
   if (buffer.byteLength > maxInputBytes) throw new Error(`the file is too large: ${(buffer.byteLength / 2 ** 30).toFixed(2)} GiB (the limit is 1 GiB)`);
   const dataEnd = buffer.byteLength - 8 - checkParquetFooter(buffer);
-  const metadata = decoding(() => parquetMetadata(buffer));
-  const top = parquetSchema(metadata).children;
+  const metadata = decoding(() => parquetMetadata(buffer), "damaged footer: ");
+  const top = decoding(() => parquetSchema(metadata).children, "damaged schema: ");
   const flat = top.filter((node) => node.children.length === 0).map((node) => node.element.name);
   const notices: Notice[] = top.filter((node) => node.children.length > 0).map((node) => ({ code: "skipped-column", message: `skipped the nested parquet column ${node.element.name}` }));
   const names = options.columns ? [...options.columns] : flat;
@@ -85,11 +85,11 @@ async function readRowGroups(buffer: ArrayBuffer, metadata: FileMetaData, column
   }
 }
 
-function decoding<T>(step: () => T): T {
+function decoding<T>(step: () => T, what: string): T {
   try {
     return step();
   } catch (error) {
-    throw new Error(`cannot read parquet file: ${lowercase(error)}`, { cause: error });
+    throw new Error(`cannot read parquet file: ${what}${lowercase(error)}`, { cause: error });
   }
 }
 

@@ -25,6 +25,16 @@ function lie(random: Random, truth: bigint): bigint {
   return pick(random, [2n ** 31n - 1n, 2n ** 30n, 2n ** 53n + 1n, 2n ** 62n, -1n, -(2n ** 31n), truth * 1000n + 7n, truth + 1n, truth - 1n, 0n, 1_000_000n]);
 }
 
+function uleb128(value: number): number[] {
+  const bytes: number[] = [];
+  do {
+    const low = value % 128;
+    value = Math.floor(value / 128);
+    bytes.push(value ? low | 0x80 : low);
+  } while (value);
+  return bytes;
+}
+
 const mutations = {
   truncate: (random: Random, bytes: Uint8Array) => bytes.slice(0, below(random, bytes.length)),
   cutData: (random: Random, bytes: Uint8Array) => {
@@ -61,6 +71,22 @@ const mutations = {
     const field = pick(random, fields);
     return rewriteParquet(layout, [intEdit(field, lie(random, field.value))]);
   },
+  levelRun: (random: Random, bytes: Uint8Array) => {
+    // the definition levels of a DATA_PAGE_V2 lead its body uncompressed: replace them with one run
+    const layout = parquetLayout(bytes);
+    const page = pick(random, layout.pages);
+    const field = (path: string): IntField => page.fields.find((f) => f.path === path)!;
+    const header = pick(random, [2 ** 31, 2 ** 30 + 1, 2 ** 21, 2 ** 32 - 1, below(random, 2 ** 32)]); // even: an RLE run of header/2; odd: header>>1 bit-packed groups
+    const levels = [...uleb128(header), ...Array.from({ length: below(random, 4) }, () => below(random, 256))];
+    const old = Number(field("8.5").value);
+    const growth = BigInt(levels.length - old);
+    return rewriteParquet(layout, [
+      { start: page.bodyStart + Number(field("8.6").value), end: page.bodyStart + old, bytes: Uint8Array.from(levels) },
+      intEdit(field("8.5"), BigInt(levels.length)),
+      intEdit(field("3"), field("3").value + growth),
+      intEdit(field("2"), field("2").value + growth),
+    ]);
+  },
   codec: (random: Random, bytes: Uint8Array) => {
     const layout = parquetLayout(bytes);
     const codecs = layout.footer.filter((f) => /^4\.\d+\.1\.\d+\.3\.4$/.test(f.path));
@@ -72,7 +98,7 @@ const mutations = {
 type Mutation = keyof typeof mutations;
 
 describe("readParquet: fuzz", () => {
-  it("600 damaged files (7 kinds × 4 codecs, seed 2026) each end in a table or one plain lowercase Error within 1 s; no allocation passes 16 MiB", async () => {
+  it("600 damaged files (8 kinds × 4 codecs, seed 2026) each end in a table or one plain lowercase Error within 1 s; no allocation passes 16 MiB", async () => {
     const random = randomSource(2026);
     const outcomes = new Map<string, number>();
     const watch = watchAllocations();
@@ -106,6 +132,7 @@ describe("readParquet: fuzz", () => {
     expect(seen).toMatch(/unsupported parquet codec: /);
     expect(seen).toMatch(/invalid parquet footer length: /);
     expect(seen).toMatch(/bytes decompressed \(the limit is /);
+    expect(seen).toMatch(/levelRun: .*a run declares/);
     expect(seen).toMatch(/: table of /);
     console.log(`slowest file ${slowest.toFixed(1)} ms; largest allocation ${watch.largest()} bytes\n${[...outcomes].sort().map(([k, v]) => `${v}\t${k}`).join("\n")}`);
   }, 120_000);
