@@ -4,7 +4,7 @@ import { checkParquetFooter } from "../../../src/core/parquet/checkParquetFooter
 import { maxPageBytesFor } from "../../../src/core/parquet/parquetLimits.ts";
 import { readParquet } from "../../../src/core/parquet/readParquet.ts";
 import { intEdit, parquetLayout, rewriteParquet, type Edit, type IntField } from "./parquetSurgery.ts";
-import { bufferOf, recompressed, snappyFixture } from "./parquetVariants.ts";
+import { bufferOf, dictionaryEncoded, recompressed, snappyFixture } from "./parquetVariants.ts";
 
 // One damaged file per check, each made from the mixed-columns fixture (1,527 bytes; test/fixtures/README.md).
 const layout = parquetLayout(snappyFixture);
@@ -105,6 +105,28 @@ describe("readParquet: damaged files end in one plain error", () => {
 
   it("a bit-packed run whose header has the sign bit set (a negative count in 32-bit arithmetic) is refused", async () => {
     await expect(readParquet(depthLevels([0xff, 0xff, 0xff, 0xff, 0x0f, 0]))).rejects.toThrow(/a run declares -8 values where at most 4 fit$/); // header 2^32 - 1 as int32 is -1; (-1 >> 1) << 3 = -8
+  });
+});
+
+describe("readParquet: a dictionary-encoded column with hostile runs", () => {
+  it("GZIP and uncompressed copies with column count dictionary-encoded read to the same table as the fixture", async () => {
+    const expected = await readParquet(bufferOf(snappyFixture));
+    for (const codec of ["GZIP", "UNCOMPRESSED"] as const) expect((await readParquet(bufferOf(dictionaryEncoded(codec)))).table).toEqual(expected.table);
+  });
+
+  it("one RLE run of 2^30 dictionary indices, inside a GZIP page, is refused without expanding it", async () => {
+    const started = performance.now();
+    await expect(readParquet(bufferOf(dictionaryEncoded("GZIP", [0x80, 0x80, 0x80, 0x80, 0x08, 1])))).rejects.toThrow(
+      /^cannot read parquet file: column count, page at byte \d+: a run declares 1073741824 values where at most 4 fit$/, // header 2^31 (by hand); 2^31 >>> 1 = 2^30
+    );
+    expect(performance.now() - started).toBeLessThan(1000); // the stated bound: one second
+  });
+
+  it("a dictionary page of 12 bytes that declares 1,000,000 values is refused (at most 8 per byte, 96)", async () => {
+    const bytes = dictionaryEncoded("UNCOMPRESSED");
+    const dictionaryPage = parquetLayout(bytes).pages[2]!;
+    const edits = [intEdit(dictionaryPage.fields.find((f) => f.path === "7.1")!, 1_000_000n)];
+    await expect(readParquet(bufferOf(rewriteParquet(parquetLayout(bytes), edits)))).rejects.toThrow(/: it declares 1000000 values where at most 96 fit$/); // by hand: 8 × 12
   });
 });
 

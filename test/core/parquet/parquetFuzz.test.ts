@@ -2,10 +2,11 @@ import { describe, expect, it } from "vitest";
 import { readParquet } from "../../../src/core/parquet/readParquet.ts";
 import { randomSource } from "../../../src/core/random.ts";
 import { parquetLayout, rewriteParquet, intEdit, type IntField } from "./parquetSurgery.ts";
-import { bufferOf, recompressed, snappyFixture } from "./parquetVariants.ts";
+import { bufferOf, dictionaryEncoded, recompressed, snappyFixture } from "./parquetVariants.ts";
 import { watchAllocations } from "./watchAllocations.ts";
 
-// Damaged and hostile variants of the mixed-columns fixture in four codecs, made by a seeded
+// Damaged and hostile variants of the mixed-columns fixture in four codecs (two of them also with
+// a dictionary-encoded column), made by a seeded
 // generator: each must end in a table or in one plain Error with a lowercase message, within a
 // second, without any single allocation past a stated bound.
 
@@ -14,6 +15,8 @@ const bases = [
   { codec: "GZIP", bytes: recompressed("GZIP") },
   { codec: "ZSTD", bytes: recompressed("ZSTD") },
   { codec: "UNCOMPRESSED", bytes: recompressed("UNCOMPRESSED") },
+  { codec: "GZIP with a dictionary", bytes: dictionaryEncoded("GZIP") },
+  { codec: "UNCOMPRESSED with a dictionary", bytes: dictionaryEncoded("UNCOMPRESSED") },
 ];
 
 type Random = () => number;
@@ -33,6 +36,12 @@ function uleb128(value: number): number[] {
     bytes.push(value ? low | 0x80 : low);
   } while (value);
   return bytes;
+}
+
+/** One run header of the RLE / bit-packing hybrid, large or random, then up to 3 random bytes. */
+function hostileRuns(random: Random): number[] {
+  const header = pick(random, [2 ** 31, 2 ** 30 + 1, 2 ** 21, 2 ** 32 - 1, 3, 8, below(random, 2 ** 32)]); // even: an RLE run of header/2; odd: header>>1 bit-packed groups
+  return [...uleb128(header), ...Array.from({ length: below(random, 4) }, () => below(random, 256))];
 }
 
 const mutations = {
@@ -67,17 +76,16 @@ const mutations = {
   },
   pageSize: (random: Random, bytes: Uint8Array) => {
     const layout = parquetLayout(bytes);
-    const fields: IntField[] = layout.pages.flatMap((p) => p.fields.filter((f) => /^(2|3|8\.(1|2|3|5|6))$/.test(f.path)));
+    const fields: IntField[] = layout.pages.flatMap((p) => p.fields.filter((f) => /^(2|3|7\.1|8\.(1|2|3|4|5|6))$/.test(f.path)));
     const field = pick(random, fields);
     return rewriteParquet(layout, [intEdit(field, lie(random, field.value))]);
   },
   levelRun: (random: Random, bytes: Uint8Array) => {
     // the definition levels of a DATA_PAGE_V2 lead its body uncompressed: replace them with one run
     const layout = parquetLayout(bytes);
-    const page = pick(random, layout.pages);
+    const page = pick(random, layout.pages.filter((p) => p.fields.some((f) => f.path === "8.5")));
     const field = (path: string): IntField => page.fields.find((f) => f.path === path)!;
-    const header = pick(random, [2 ** 31, 2 ** 30 + 1, 2 ** 21, 2 ** 32 - 1, below(random, 2 ** 32)]); // even: an RLE run of header/2; odd: header>>1 bit-packed groups
-    const levels = [...uleb128(header), ...Array.from({ length: below(random, 4) }, () => below(random, 256))];
+    const levels = hostileRuns(random);
     const old = Number(field("8.5").value);
     const growth = BigInt(levels.length - old);
     return rewriteParquet(layout, [
@@ -87,6 +95,7 @@ const mutations = {
       intEdit(field("2"), field("2").value + growth),
     ]);
   },
+  indexRun: (random: Random) => dictionaryEncoded(pick(random, ["GZIP", "UNCOMPRESSED"] as const), hostileRuns(random)),
   codec: (random: Random, bytes: Uint8Array) => {
     const layout = parquetLayout(bytes);
     const codecs = layout.footer.filter((f) => /^4\.\d+\.1\.\d+\.3\.4$/.test(f.path));
@@ -98,7 +107,7 @@ const mutations = {
 type Mutation = keyof typeof mutations;
 
 describe("readParquet: fuzz", () => {
-  it("600 damaged files (8 kinds × 4 codecs, seed 2026) each end in a table or one plain lowercase Error within 1 s; no allocation passes 16 MiB", async () => {
+  it("600 damaged files (9 kinds × 6 bases, seed 2026) each end in a table or one plain lowercase Error within 1 s; no allocation passes 16 MiB", async () => {
     const random = randomSource(2026);
     const outcomes = new Map<string, number>();
     const watch = watchAllocations();
@@ -133,6 +142,7 @@ describe("readParquet: fuzz", () => {
     expect(seen).toMatch(/invalid parquet footer length: /);
     expect(seen).toMatch(/bytes decompressed \(the limit is /);
     expect(seen).toMatch(/levelRun: .*a run declares/);
+    expect(seen).toMatch(/indexRun: .*a run declares/);
     expect(seen).toMatch(/: table of /);
     console.log(`slowest file ${slowest.toFixed(1)} ms; largest allocation ${watch.largest()} bytes\n${[...outcomes].sort().map(([k, v]) => `${v}\t${k}`).join("\n")}`);
   }, 120_000);

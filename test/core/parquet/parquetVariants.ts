@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { gzipSync } from "fflate";
 import { snappyUncompress } from "hyparquet";
-import { parquetLayout, rewriteParquet, intEdit, type Edit } from "./parquetSurgery.ts";
+import { compactInt, intEdit, parquetLayout, rewriteParquet, type Edit } from "./parquetSurgery.ts";
 
 /** The Snappy fixture (test/fixtures/README.md) as bytes. */
 export const snappyFixture = new Uint8Array(readFileSync(new URL("../../fixtures/mixed-columns.parquet", import.meta.url)));
@@ -42,3 +42,32 @@ export function recompressed(codec: keyof typeof codecIds): Uint8Array {
 
 /** A fresh ArrayBuffer holding exactly these bytes. */
 export const bufferOf = (bytes: Uint8Array): ArrayBuffer => bytes.slice().buffer;
+
+const pack = (codec: "UNCOMPRESSED" | "GZIP", bytes: Uint8Array): Uint8Array => (codec === "GZIP" ? gzipSync(bytes) : bytes);
+
+/**
+ * A copy of the fixture in `codec` whose column `count` in row group 0 (3, 4, null, 6) is
+ * dictionary-encoded: a DICTIONARY_PAGE of the PLAIN INT32 values 3, 4, 6 is put before its data
+ * page, which becomes RLE_DICTIONARY with a bit width of 2 and the given index runs (Apache Parquet
+ * format, "Encodings"). The default runs are one bit-packed group (header 3) of the indices
+ * 0, 1, 2: bits 00 01 10, least significant first, are the bytes 0x24, 0x00 (worked by hand).
+ */
+export function dictionaryEncoded(codec: "UNCOMPRESSED" | "GZIP", indexRuns: readonly number[] = [3, 0x24, 0x00]): Uint8Array {
+  const base = recompressed(codec);
+  const layout = parquetLayout(base);
+  const page = layout.pages[2]!; // sample, depth, count: the third chunk of row group 0
+  const field = (path: string) => page.fields.find((f) => f.path === path)!;
+  const dictionary = Uint8Array.of(3, 0, 0, 0, 4, 0, 0, 0, 6, 0, 0, 0); // PLAIN INT32, little-endian
+  const dictionaryBody = pack(codec, dictionary);
+  // PageHeader (compact protocol): 1 type = 2 (DICTIONARY_PAGE), 2 and 3 sizes, 7 DictionaryPageHeader {1 num_values = 3, 2 encoding = 0 (PLAIN)}
+  const dictionaryHeader = [0x15, 4, 0x15, ...compactInt(12n), 0x15, ...compactInt(BigInt(dictionaryBody.length)), 0x4c, 0x15, 6, 0x15, 0, 0, 0];
+  const levels = Number(field("8.5").value) + Number(field("8.6").value);
+  const values = pack(codec, Uint8Array.from([2, ...indexRuns]));
+  return rewriteParquet(layout, [
+    { start: page.headerStart, end: page.headerStart, bytes: Uint8Array.from([...dictionaryHeader, ...dictionaryBody]) },
+    intEdit(field("2"), BigInt(levels + 1 + indexRuns.length)),
+    intEdit(field("3"), BigInt(levels + values.length)),
+    intEdit(field("8.4"), 8n), // RLE_DICTIONARY
+    { start: page.bodyStart + levels, end: page.bodyEnd, bytes: values },
+  ]);
+}
