@@ -1,6 +1,7 @@
 import { readFile } from "node:fs/promises";
 import { expect, it } from "vitest";
 import { contentSecurityPolicy } from "../../vite.config.ts";
+import { dictionaryEncoded } from "../core/parquet/parquetVariants.ts";
 import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // The content security policy of the built page: present in dist/index.html and in the preview
@@ -120,4 +121,27 @@ it("a fetch and an image to another origin are each refused by both the meta and
     { blockedURI: "http://127.0.0.2:9/table", effectiveDirective: "connect-src", policy: "header" },
     { blockedURI: "http://127.0.0.2:9/table", effectiveDirective: "connect-src", policy: "meta" },
   ]);
+});
+
+it("in the worker under the policy, the Parquet fixture loads and a file with a 2^30-index run shows one error at once", async () => {
+  const { page } = session.browser();
+  const violations = await recordViolations(page);
+  const errors = recordPageErrors(page);
+  await page.goto(session.preview().url);
+  await page.getByTestId("node-count").waitFor();
+  const fixture = await readFile(new URL("../fixtures/mixed-columns.parquet", import.meta.url));
+  await page.getByTestId("file-input").setInputFiles({ name: "mixed-columns.parquet", mimeType: "application/octet-stream", buffer: fixture });
+  await page.getByText("mixed-columns.parquet").waitFor(); // a file with notices opens on its report
+  await page.getByTestId("table-report").getByRole("rowheader", { name: "depth" }).waitFor();
+
+  const hostile = dictionaryEncoded("GZIP", [0x80, 0x80, 0x80, 0x80, 0x08, 1]); // one RLE run header of 2^31: 2^30 copies
+  const started = Date.now();
+  await page.getByTestId("file-input").setInputFiles({ name: "hostile.parquet", mimeType: "application/octet-stream", buffer: Buffer.from(hostile) });
+  const alert = page.getByRole("alert");
+  await alert.waitFor();
+  expect(Date.now() - started).toBeLessThan(5000); // one second in the reader, plus the browser's file and message round trip (our margin, no source)
+  expect(await alert.textContent()).toMatch(/a run declares 1073741824 values where at most 4 fit/);
+  await saveScreenshot(page, "security-hostile-parquet");
+  expect(await violations()).toEqual([]);
+  expect(errors).toEqual([]);
 });
