@@ -1,4 +1,6 @@
+import { spawn } from "node:child_process";
 import { readFile } from "node:fs/promises";
+import { createServer } from "node:net";
 import { expect, it } from "vitest";
 import { contentSecurityPolicy } from "../../vite.config.ts";
 import { dictionaryEncoded } from "../core/parquet/parquetVariants.ts";
@@ -73,6 +75,30 @@ it("the preview server sends the policy with frame-ancestors 'none', keeps the i
   expect(response.headers.get("cross-origin-embedder-policy")).toBe("require-corp");
   const readme = await readFile(new URL("../../README.md", import.meta.url), "utf8");
   expect(readme).toContain(`Content-Security-Policy: ${response.headers.get("content-security-policy")}\n`); // the hosting section gives the same header
+});
+
+it("npm start's server (scripts/serve.mjs) sends the same policy header", async () => {
+  const port = await new Promise<number>((resolve) => {
+    const probe = createServer().listen(0, "127.0.0.1", () => {
+      const address = probe.address();
+      probe.close(() => resolve(typeof address === "object" && address ? address.port : 0));
+    });
+  });
+  const child = spawn(process.execPath, ["scripts/serve.mjs"], { cwd: new URL("../..", import.meta.url), env: { ...process.env, PORT: String(port) }, stdio: ["ignore", "pipe", "pipe"] });
+  try {
+    const url = await new Promise<string>((resolve, reject) => {
+      child.stdout.on("data", (chunk: Buffer) => {
+        const found = /http:\/\/127\.0\.0\.1:\d+\//.exec(chunk.toString());
+        if (found) resolve(found[0]);
+      });
+      child.once("exit", (code) => reject(new Error(`serve.mjs exited with ${code}`)));
+    });
+    const response = await fetch(url);
+    await response.body?.cancel();
+    expect(response.headers.get("content-security-policy")).toBe(`${contentSecurityPolicy}; frame-ancestors 'none'`);
+  } finally {
+    child.kill("SIGTERM");
+  }
 });
 
 it("demo: loading, building, opening a node and exporting raise no policy violation and no request off 127.0.0.1", async () => {

@@ -14,7 +14,8 @@ import { maxPageBytesFor } from "./parquetLimits.ts";
  * (checkPageRuns, which decompresses the pages that hold such a stream inside their compressed
  * part). So what the decoder allocates from these counts stays within the row group's size, which
  * checkParquetMetadata has already capped. Throws one plain error naming the column and page.
- * O(bytes of the chunks read).
+ * O(bytes of the chunks read); holds one decompressed page at a time. Those pages are decompressed
+ * again by the decoder: on the 13 MB flights-3m file (ZSTD) this walk took about 1 s of a 20 s read.
  * Call after checkParquetMetadata (chunk ranges inside the file).
  */
 export function checkParquetPages(buffer: ArrayBuffer, metadata: FileMetaData, columns: readonly string[], rowEnd: number): void {
