@@ -1,5 +1,5 @@
 // `npm start`: serves the already built dist/ on this machine only, with the headers from
-// vite.config.ts (cross-origin isolation), until the process is stopped.
+// vite.config.ts (cross-origin isolation and the content security policy), until the process is stopped.
 import { existsSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { preview } from "vite";

@@ -4,7 +4,9 @@ import { maxInputBytes } from "../table/readOptions.ts";
 import type { ColumnReport, Notice, ReadOutcome } from "../table/tableReport.ts";
 import { tableNotices } from "../table/tableOutcome.ts";
 import type { TableColumn } from "../table/types.ts";
-import { isParquet } from "./isParquet.ts";
+import { checkParquetFooter } from "./checkParquetFooter.ts";
+import { checkParquetMetadata } from "./checkParquetMetadata.ts";
+import { checkParquetPages } from "./checkParquetPages.ts";
 import { parquetColumn, pushParquetValue, type ParquetColumn } from "./parquetColumn.ts";
 import { parquetCompressors } from "./parquetCompressors.ts";
 
@@ -24,23 +26,26 @@ export interface ParquetOptions {
  * nulls are empty cells; NaN and ±Infinity in number columns count as missing tokens; strings,
  * booleans and dates go through the same type inference as CSV cells; nested columns are skipped
  * with a notice. Throws one clear error for a file that is not Parquet, cannot be decoded, has no
- * flat column or no row, or names an unknown column. O(cells read).
+ * flat column or no row, or names an unknown column. A damaged or hostile file ends in one such
+ * error too: the footer's frame and declared sizes are checked before any page is decoded, and
+ * each page's decompressed size as it is read, against the limits in parquetLimits.ts. O(cells read).
  */
 export async function readParquet(buffer: ArrayBuffer, options: ParquetOptions = {}): Promise<ReadOutcome> {
   if (buffer.byteLength > maxInputBytes) throw new Error(`the file is too large: ${(buffer.byteLength / 2 ** 30).toFixed(2)} GiB (the limit is 1 GiB)`);
-  if (!isParquet(buffer)) throw new Error("this is not a parquet file: it does not start and end with PAR1");
-  const metadata = decoding(() => parquetMetadata(buffer));
-  const top = parquetSchema(metadata).children;
+  const dataEnd = buffer.byteLength - 8 - checkParquetFooter(buffer);
+  const metadata = decoding(() => parquetMetadata(buffer), "damaged footer: ");
+  const top = decoding(() => parquetSchema(metadata).children, "damaged schema: ");
   const flat = top.filter((node) => node.children.length === 0).map((node) => node.element.name);
   const notices: Notice[] = top.filter((node) => node.children.length > 0).map((node) => ({ code: "skipped-column", message: `skipped the nested parquet column ${node.element.name}` }));
   const names = options.columns ? [...options.columns] : flat;
   for (const name of names) if (!flat.includes(name)) throw new Error(top.some((n) => n.element.name === name) ? `nested parquet column not supported: ${name}` : `unknown column: ${name}`);
   if (names.length === 0) throw new Error("the parquet file has no flat column to read");
   const columns = new Map(names.map((name) => [name, parquetColumn(top.find((n) => n.element.name === name)!.element)]));
-  const total = Number(metadata.num_rows);
+  const total = checkParquetMetadata(metadata, names, dataEnd);
   const rowEnd = Math.min(total, options.rowEnd ?? total);
   if (!(rowEnd >= 0)) throw new Error(`invalid row end: ${options.rowEnd}`);
   if (rowEnd === 0) throw new Error("the parquet file has no rows");
+  checkParquetPages(buffer, metadata, names, rowEnd);
   await readRowGroups(buffer, metadata, columns, rowEnd, options.onProgress);
 
   const tableColumns: TableColumn[] = [];
@@ -80,11 +85,11 @@ async function readRowGroups(buffer: ArrayBuffer, metadata: FileMetaData, column
   }
 }
 
-function decoding<T>(step: () => T): T {
+function decoding<T>(step: () => T, what: string): T {
   try {
     return step();
   } catch (error) {
-    throw new Error(`cannot read parquet file: ${lowercase(error)}`, { cause: error });
+    throw new Error(`cannot read parquet file: ${what}${lowercase(error)}`, { cause: error });
   }
 }
 
