@@ -6,6 +6,7 @@ import { demoTable } from "./demo.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
+import type { NamedRegion } from "./slices/selectionSlice.ts";
 import { workbenchStore, type WorkbenchStore } from "./store.ts";
 
 export interface ActionEnvironment {
@@ -67,7 +68,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     const roles = defaultRoles(table, hints);
     const colour = colorBy ?? table.columns.find((c) => roles[c.name] === "outcome" && c.kind === "numeric")?.name ?? null;
     set({
-      source, table, report: answer.report, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, regionNodes: [],
+      source, table, report: answer.report, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, selection: [],
       radius: NaN, suggestedRadius: NaN, sweep: null, region: null, seedRuns: null,
       stage: answer.report.notices.length > 0 && !source.isDemo ? "report" : "graph",
     });
@@ -93,7 +94,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     // no default radius: say why and build nothing (a graph of the previous recipe would mislead)
     latestBuild++;
     const error = answer.type === "failed" ? answer.message : answer.type === "radius" ? `no default radius for this recipe: ${answer.radius}` : "unexpected answer";
-    set({ suggestedRadius: NaN, result: null, selectedNode: null, regionNodes: [], build: { state: "failed", phase: null, fraction: 0, error, elapsedMs: null } });
+    set({ suggestedRadius: NaN, result: null, selectedNode: null, selection: [], build: { state: "failed", phase: null, fraction: 0, error, elapsedMs: null } });
   }
 
   async function rebuild(): Promise<void> {
@@ -116,7 +117,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     mark(answer.type === "cancelled" ? "shoal:build-cancelled" : "shoal:build-answered");
     if (ticket !== latestBuild || answer.type === "cancelled") return;
     if (answer.type === "built") {
-      set({ result: answer.result, selectedNode: null, regionNodes: [], build: { state: "done", phase: null, fraction: 1, error: null, elapsedMs: env.now() - started } });
+      set({ result: answer.result, selectedNode: null, selection: [], build: { state: "done", phase: null, fraction: 1, error: null, elapsedMs: env.now() - started } });
     } else {
       set({ build: { state: "failed", phase: null, fraction: 0, error: answer.type === "failed" ? answer.message : "unexpected answer", elapsedMs: null } });
     }
@@ -220,13 +221,33 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
      * (shift-click, "Add to region") the node also joins the region, or leaves it if it was in.
      */
     selectNode(selectedNode: number | null, toggleRegion = false): Promise<void> {
-      const region = store.getState().regionNodes;
+      const region = store.getState().selection;
       if (selectedNode === null || !toggleRegion) set({ selectedNode });
-      else if (region.includes(selectedNode)) set({ selectedNode, regionNodes: region.filter((k) => k !== selectedNode) });
-      else set({ selectedNode, regionNodes: [...region, selectedNode].sort((a, b) => a - b) });
+      else if (region.includes(selectedNode)) set({ selectedNode, selection: region.filter((k) => k !== selectedNode) });
+      else set({ selectedNode, selection: [...region, selectedNode].sort((a, b) => a - b) });
       return requestNodeStats();
     },
-    clearRegion: (): void => set({ regionNodes: [] }),
+    clearRegion: (): void => set({ selection: [] }),
+    /** Keeps the selection as a new named region ("Region A", "Region B", …): the union of its nodes' rows, each once; it becomes the active region. */
+    keepSelectionAsRegion(): NamedRegion | null {
+      const s = store.getState();
+      const rows = selectRegionRows(s);
+      if (!rows || rows.length === 0) return null;
+      const id = nextRegionId++;
+      const region: NamedRegion = { id, name: `Region ${regionLetters(s.regions.length)}`, rows };
+      set({ regions: [...s.regions, region], activeRegionId: id });
+      return region;
+    },
+    renameRegion(id: number, name: string): void {
+      const trimmed = name.trim();
+      if (trimmed === "") return;
+      set({ regions: store.getState().regions.map((r) => (r.id === id ? { ...r, name: trimmed } : r)) });
+    },
+    deleteRegion(id: number): void {
+      const s = store.getState();
+      set({ regions: s.regions.filter((r) => r.id !== id), activeRegionId: s.activeRegionId === id ? null : s.activeRegionId });
+    },
+    setActiveRegion: (activeRegionId: number | null): void => set({ activeRegionId }),
     showStage: (stage: "graph" | "report"): void => set({ stage }),
     setSweepRange(sweepMin: number | null, sweepMax: number | null, sweepSteps: number): void {
       set({ sweepMin, sweepMax, sweepSteps });
@@ -304,6 +325,15 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
 /** What to show for an answer that is not the one asked for. */
 const answerError = (answer: Answer): string =>
   answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
+
+let nextRegionId = 1;
+
+/** Bijective base-26 letters: 0 → A, 25 → Z, 26 → AA. */
+export function regionLetters(index: number): string {
+  let name = "";
+  for (let k = index + 1; k > 0; k = Math.floor((k - 1) / 26)) name = String.fromCharCode(65 + ((k - 1) % 26)) + name;
+  return name;
+}
 
 const cancelledNotice = (fileName: string): string => `reading ${fileName} was cancelled; the table shown is unchanged`;
 

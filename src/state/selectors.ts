@@ -120,12 +120,12 @@ export const selectNodeDetail = (s: WorkbenchState): NodeDetail | null => memoDe
 export const selectStatsColumns = (s: WorkbenchState): string[] =>
   s.table ? s.table.columns.filter((c) => c.kind === "numeric" && s.roles[c.name] !== "ignore").map((c) => c.name) : [];
 
-const memoRegionRows = memoizeLast((result: WorkbenchState["result"], regionNodes: readonly number[]): Uint32Array | null => {
-  if (!result || regionNodes.length === 0) return null;
+const memoRegionRows = memoizeLast((result: WorkbenchState["result"], selection: readonly number[]): Uint32Array | null => {
+  if (!result || selection.length === 0) return null;
   const rows = new Set<number>();
-  for (const node of regionNodes) if (node < result.landmarks.length) for (const row of nodeMembers(result.members, node)) rows.add(row);
+  for (const node of selection) if (node < result.landmarks.length) for (const row of nodeMembers(result.members, node)) rows.add(row);
   return Uint32Array.from([...rows].sort((a, b) => a - b));
 });
 
 /** Parsed-table rows of the region (the union of its nodes' members), or null when no region is selected. */
-export const selectRegionRows = (s: WorkbenchState): Uint32Array | null => memoRegionRows(s.result, s.regionNodes);
+export const selectRegionRows = (s: WorkbenchState): Uint32Array | null => memoRegionRows(s.result, s.selection);

@@ -18,29 +18,29 @@ describe("actions: selectNode and the region", () => {
   it("a plain selection opens node 0 and leaves the region empty", async () => {
     const { store, actions } = await built();
     actions.selectNode(0);
-    expect(store.getState()).toMatchObject({ selectedNode: 0, regionNodes: [] });
+    expect(store.getState()).toMatchObject({ selectedNode: 0, selection: [] });
   });
 
   it("a plain selection of another node keeps the region made by shift-click as it was", async () => {
     const { store, actions } = await built();
     actions.selectNode(1, true);
     actions.selectNode(0);
-    expect(store.getState()).toMatchObject({ selectedNode: 0, regionNodes: [1] });
+    expect(store.getState()).toMatchObject({ selectedNode: 0, selection: [1] });
   });
 
   it("shift-selection toggles: node 1 then node 0 give region [0, 1]; node 1 again gives [0]", async () => {
     const { store, actions } = await built();
     actions.selectNode(1, true);
     actions.selectNode(0, true);
-    expect(store.getState().regionNodes).toEqual([0, 1]);
+    expect(store.getState().selection).toEqual([0, 1]);
     actions.selectNode(1, true);
-    expect(store.getState().regionNodes).toEqual([0]);
+    expect(store.getState().selection).toEqual([0]);
   });
 
   it("closing the pane (null) keeps the region", async () => {
     const { store, actions } = await built();
     actions.selectNode(1, true);
     actions.selectNode(null);
-    expect(store.getState()).toMatchObject({ selectedNode: null, regionNodes: [1] });
+    expect(store.getState()).toMatchObject({ selectedNode: null, selection: [1] });
   });
 });

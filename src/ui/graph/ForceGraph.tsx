@@ -14,7 +14,7 @@ export function ForceGraph() {
   const result = tooLarge ? null : built;
   const selected = useWorkbench((s) => s.selectedNode);
   const fill = useWorkbench(selectNodeFill);
-  const region = useWorkbench((s) => s.regionNodes);
+  const region = useWorkbench((s) => s.selection);
   const canvas = useRef<HTMLCanvasElement>(null);
   const view = useRef<View | null>(null);
   const marked = useRef<Layout | null>(null);
@@ -34,8 +34,8 @@ export function ForceGraph() {
     }
     context.setTransform(ratio, 0, 0, ratio, 0, 0);
     view.current = fitTransform(layout, width, height);
-    const { fillOf, selected: chosen, region: regionNodes } = paint.current;
-    drawGraph(context, layout, view.current, { width, height, fillOf, selected: chosen, region: regionNodes });
+    const { fillOf, selected: chosen, region: selection } = paint.current;
+    drawGraph(context, layout, view.current, { width, height, fillOf, selected: chosen, region: selection });
     if (marked.current !== layout) performance.mark("shoal:graph-drawn"); // the first drawing of this result's layout
     marked.current = layout;
   }, []);

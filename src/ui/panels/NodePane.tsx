@@ -6,7 +6,7 @@ import { useWorkbench } from "../useWorkbench.ts";
 /** Member statistics of the open node, per column: centre and spread, quartiles, and its difference from all rows. */
 export function NodePane() {
   const detail = useWorkbench(selectNodeDetail);
-  const inRegion = useWorkbench((s) => detail !== null && s.regionNodes.includes(detail.node));
+  const inRegion = useWorkbench((s) => detail !== null && s.selection.includes(detail.node));
   if (!detail) return <p className="note">Click a node in the graph, or choose one in the list above, to see its members.</p>;
   return (
     <section className="node-pane" aria-labelledby="node-title" data-testid="node-pane">

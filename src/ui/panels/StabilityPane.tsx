@@ -12,7 +12,7 @@ export function StabilityPane() {
   const region = useWorkbench((s) => s.region);
   const radius = useWorkbench((s) => s.radius);
   const status = useWorkbench((s) => s.stability);
-  const regionSize = useWorkbench((s) => s.regionNodes.length);
+  const regionSize = useWorkbench((s) => s.selection.length);
   const seed = useWorkbench((s) => s.seed);
   return (
     <section className="stability-pane" aria-label="stability" data-testid="stability-pane">
