@@ -21,6 +21,7 @@ describe("regionTable on a table worked by hand", () => {
 
   it("the figures are those worked by hand (z leaves its missing value out: 2 against 2)", () => {
     const [z, x, y, g] = result.lines;
+    if (z?.kind !== "numeric" || x?.kind !== "numeric" || y?.kind !== "numeric" || g?.kind !== "categorical") throw new Error("unexpected line kinds");
     expect([z!.nInside, z!.nOutside, x!.nInside, x!.nOutside, g!.nInside, g!.nOutside]).toEqual([2, 2, 3, 2, 3, 2]);
     assertClose([z!.statistic, z!.p], [1, 1 / 3]); // worked by hand: no overlap; 2 of the 6 orderings of 2 + 2 values
     assertClose([x!.statistic, x!.p, x!.d], [0.5, 0.9, -Math.sqrt(3) / 2]); // worked by hand (see compareNumeric.test.ts)
