@@ -1,5 +1,5 @@
 import { rename, rm, writeFile } from "node:fs/promises";
-import { regionSides, regionTable, regionTableCsv } from "../core/index.ts";
+import { regionSides, regionTable, regionTableCsv, type RegionTable } from "../core/index.ts";
 import { buildFromFile } from "./buildFromFile.ts";
 import type { ExplainCommand } from "./parseExplainArgs.ts";
 import { chosenRows } from "./regionArgs.ts";
@@ -21,6 +21,7 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
     `${explained.rowsInside} rows inside, ${explained.rowsOutside} ${command.versus ? "in the second set" : "outside"}`,
     ...(explained.inBoth > 0 ? [`${explained.inBoth} rows in both left out`] : []),
     `${explained.rowsUnused} rows left out of the build${explained.regionRowsUnused > 0 ? ` (${explained.regionRowsUnused} of them chosen)` : ""}`,
+    ...flagged(explained),
     ...(explained.skipped.length > 0 ? [`not tested: ${explained.skipped.map((s) => `${s.column} (${s.reason})`).join(", ")}`] : []),
   ].join("; ");
   if (command.outFile === null) {
@@ -36,4 +37,10 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
     throw new Error(`cannot write ${command.outFile}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
   }
   return `${explained.lines.length} columns compared; ${notes}; wrote ${command.outFile}\n`;
+}
+
+// The CSV has no column for it, so the note names the chi-squared lines whose approximation is poor.
+function flagged(table: RegionTable): string[] {
+  const names = table.lines.filter((line) => line.kind === "categorical" && line.hasSmallExpected).map((line) => line.column);
+  return names.length > 0 ? [`chi-squared with an expected count below 5: ${names.join(", ")}`] : [];
 }
