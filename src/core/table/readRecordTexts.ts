@@ -23,7 +23,8 @@ export interface RecordTextOptions {
  * is row k − 1 of the table the build read. Cells come exactly as written in the file (`007`,
  * `1,5`, all 20 digits of a long number; line breaks inside quotes as "\n"), one per header field:
  * a short record is padded with "" and a long one cut, as the "pad" policy does.
- * For Parquet there is no text: each cell is the table's value in its shortest exact form (`cellText`).
+ * For Parquet there is no text: the table is read again whole and each cell is its value in shortest
+ * exact form (`cellText`).
  * `rows` are 0-based; the answer maps each wanted row that exists to its cells. Reading stops after
  * the last wanted row. O(file size up to that row); memory: the wanted rows' texts plus one chunk.
  */
@@ -32,7 +33,8 @@ export async function readRecordTexts(source: ByteSource, rows: ArrayLike<number
   const found = new Map<number, readonly string[]>();
   const { size } = source;
   if (size === 0 || wanted.size === 0) return found;
-  const last = Math.max(...wanted);
+  let last = 0;
+  for (const row of wanted) if (row > last) last = row; // not Math.max(...wanted): a million arguments overflow the stack
   const head = await source.read(0, Math.min(size, encodingProbeBytes));
   if (size >= 12 && isParquet(head.subarray(0, 4)) && isParquet(await source.read(size - 4, size))) {
     const bytes = await source.read(0, size);

@@ -94,3 +94,11 @@ describe("readRecordTexts", () => {
     await expect(readRecordTexts(sourceOf(new TextEncoder().encode(text)), [0], { delimiter: "," }, { utf8, shouldStop: () => true })).rejects.toThrow("reading the rows again was cancelled");
   });
 });
+
+describe("readRecordTexts with many wanted rows", () => {
+  it("takes 200,000 wanted rows (more than a call's argument limit) and returns those that exist", async () => {
+    const bytes = new TextEncoder().encode("x\n1\n2\n");
+    const texts = await readRecordTexts(sourceOf(bytes), Uint32Array.from({ length: 200_000 }, (_, k) => k), { delimiter: "," }, { utf8 });
+    expect([...texts.entries()]).toEqual([[0, ["1"]], [1, ["2"]]]);
+  });
+});
