@@ -5,6 +5,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { nodeRows, parseCsvText, regionSides, regionTable, regionTableCsv } from "../../src/core/index.ts";
+import { explainUsage } from "../../src/cli/parseExplainArgs.ts";
 import { initialParams } from "../../src/state/slices/paramsSlice.ts";
 import { assertClose } from "../assertClose.ts";
 import { demoPath, runShoal, uiExport, type Run } from "./runShoal.ts";
@@ -133,6 +134,10 @@ describe.concurrent("region errors: one line on stderr, exit code 2, nothing wri
     const out = join(scratch, "error-node");
     await fails(["build", smallPath, "--out", out, ...smallArgs, "--region-nodes", "2,9"], "node out of range: 9 (the graph has nodes 1 to 3)");
     expect(existsSync(out)).toBe(false);
+  });
+
+  it("shoal help explain prints the explain usage on stdout and exits 0", async () => {
+    expect(await runShoal(["help", "explain"])).toEqual({ code: 0, stdout: `${explainUsage}\n`, stderr: "" });
   });
 
   it("explain --nodes 4 on a graph of 3 nodes: \"node out of range: 4 (the graph has nodes 1 to 3)\"", async () => {
