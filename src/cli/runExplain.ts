@@ -1,8 +1,8 @@
-import { rename, rm, writeFile } from "node:fs/promises";
 import { regionSides, regionTable, regionTableCsv, type RegionTable } from "../core/index.ts";
 import { buildFromFile } from "./buildFromFile.ts";
 import type { ExplainCommand } from "./parseExplainArgs.ts";
 import { chosenRows } from "./regionArgs.ts";
+import { writeFileWhole } from "./writeFileWhole.ts";
 
 /**
  * Builds as `shoal build` does, then writes the region table (`regionTable`) of the chosen rows
@@ -28,14 +28,7 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
     console.error(`shoal: ${notes}`);
     return csv;
   }
-  const staging = `${command.outFile}.partial-${process.pid}`;
-  try {
-    await writeFile(staging, csv);
-    await rename(staging, command.outFile);
-  } catch (error) {
-    await rm(staging, { force: true });
-    throw new Error(`cannot write ${command.outFile}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
-  }
+  await writeFileWhole(command.outFile, csv);
   return `${explained.lines.length} columns compared; ${notes}; wrote ${command.outFile}\n`;
 }
 

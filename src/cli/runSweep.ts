@@ -1,8 +1,8 @@
-import { rename, rm, writeFile } from "node:fs/promises";
 import { csvLine, csvNumber, radiusSweep, type RadiusSweep } from "../core/index.ts";
 import { resolveFeatures } from "./commonOptions.ts";
 import type { SweepCommand } from "./parseSweepArgs.ts";
 import { readInput } from "./readInput.ts";
+import { writeFileWhole } from "./writeFileWhole.ts";
 
 export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1", "cycle_rank", "balls_per_row", "largest_node_share", "largest_component_share", "plateau", "plateau_middle"];
 
@@ -21,14 +21,7 @@ export async function runSweep(command: SweepCommand): Promise<string> {
   });
   const csv = sweepCsv(sweep);
   if (command.outFile === null) return csv;
-  const staging = `${command.outFile}.partial-${process.pid}`;
-  try {
-    await writeFile(staging, csv);
-    await rename(staging, command.outFile);
-  } catch (error) {
-    await rm(staging, { force: true });
-    throw new Error(`cannot write ${command.outFile}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
-  }
+  await writeFileWhole(command.outFile, csv);
   const { suggestion } = sweep;
   const suggested = suggestion ? `suggested radius ${suggestion.radius} (b0 ${suggestion.plateau.b0}, b1 ${suggestion.plateau.b1})` : "no suggested radius";
   return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${suggested}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;

@@ -232,3 +232,38 @@ export function useBrowserSession(): { readonly preview: () => Preview; readonly
   });
   return { preview: () => preview!, browser: () => browser! };
 }
+
+/** CSS-pixel position of an opaque node pixel on the canvas, once the layout has settled. */
+export async function settledNodePoint(page: Page): Promise<{ x: number; y: number }> {
+  let previous = "";
+  for (let attempt = 0; attempt < 40; ++attempt) {
+    await page.waitForTimeout(500);
+    const probe = await page.evaluate(() => {
+      const canvas = document.querySelector<HTMLCanvasElement>("[data-testid=graph-canvas]")!;
+      const context = canvas.getContext("2d")!;
+      const { data, width, height } = context.getImageData(0, 0, canvas.width, canvas.height);
+      let hash = 0;
+      let found: { x: number; y: number } | null = null;
+      for (let i = 0; i < data.length; i += 4 * 7) hash = (hash * 31 + data[i]! + data[i + 3]!) | 0;
+      // a node interior: opaque and not the pale stroke colour; search from the centre outwards by rows
+      for (let y = Math.floor(height / 2); y < height && !found; y += 3) {
+        for (let x = 0; x < width; x += 3) {
+          const p = (y * width + x) * 4;
+          const [r, g, b, a] = [data[p]!, data[p + 1]!, data[p + 2]!, data[p + 3]!];
+          if (a === 255 && !(r > 235 && g > 235 && b > 225)) {
+            // require the pixel 2 px to the right and below to be opaque too, so it is inside a disc
+            const q = ((y + 2) * width + x + 2) * 4;
+            if (data[q + 3] === 255) {
+              found = { x: (x + 2) / (canvas.width / canvas.clientWidth), y: (y + 2) / (canvas.height / canvas.clientHeight) };
+              break;
+            }
+          }
+        }
+      }
+      return { hash: String(hash), found };
+    });
+    if (probe.found && probe.hash === previous) return probe.found;
+    previous = probe.hash;
+  }
+  throw new Error("the graph did not settle with a visible node");
+}

@@ -4,7 +4,7 @@ import { createServer } from "node:net";
 import { expect, it } from "vitest";
 import { contentSecurityPolicy } from "../../vite.config.ts";
 import { dictionaryEncoded } from "../core/parquet/parquetVariants.ts";
-import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
+import { recordPageErrors, recordRequests, saveScreenshot, settledNodePoint, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // The content security policy of the built page: present in dist/index.html and in the preview
 // server's headers, refusing requests to any other origin, and quiet while the demo is used.
@@ -27,36 +27,6 @@ async function recordViolations(page: LaunchedBrowser["page"]): Promise<() => Pr
     );
   });
   return () => page.evaluate(() => (window as unknown as { shoalViolations: Violation[] }).shoalViolations);
-}
-
-/** CSS-pixel position of an opaque node pixel on the canvas, once the layout has settled. */
-async function settledNodePoint(page: LaunchedBrowser["page"]): Promise<{ x: number; y: number }> {
-  let previous = "";
-  for (let attempt = 0; attempt < 40; ++attempt) {
-    await page.waitForTimeout(500);
-    const probe = await page.evaluate(() => {
-      const canvas = document.querySelector<HTMLCanvasElement>("[data-testid=graph-canvas]")!;
-      const { data, width, height } = canvas.getContext("2d")!.getImageData(0, 0, canvas.width, canvas.height);
-      let hash = 0;
-      let found: { x: number; y: number } | null = null;
-      for (let i = 0; i < data.length; i += 4 * 7) hash = (hash * 31 + data[i]! + data[i + 3]!) | 0;
-      for (let y = Math.floor(height / 2); y < height && !found; y += 3) {
-        for (let x = 0; x < width; x += 3) {
-          const p = (y * width + x) * 4;
-          const [r, g, b, a] = [data[p]!, data[p + 1]!, data[p + 2]!, data[p + 3]!];
-          const q = ((y + 2) * width + x + 2) * 4;
-          if (a === 255 && !(r > 235 && g > 235 && b > 225) && data[q + 3] === 255) {
-            found = { x: (x + 2) / (canvas.width / canvas.clientWidth), y: (y + 2) / (canvas.height / canvas.clientHeight) };
-            break;
-          }
-        }
-      }
-      return { hash: String(hash), found };
-    });
-    if (probe.found && probe.hash === previous) return probe.found;
-    previous = probe.hash;
-  }
-  throw new Error("the graph did not settle with a visible node");
 }
 
 it("dist/index.html carries the policy in a meta tag before any script", async () => {

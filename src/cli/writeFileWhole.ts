@@ -1,0 +1,17 @@
+import { rename, rm, writeFile } from "node:fs/promises";
+
+/**
+ * Writes one output file whole or not at all: the text goes to a staging file beside it, which is
+ * renamed over the target only once complete (a rename within one folder replaces atomically on
+ * POSIX file systems), so a reader never sees half a file and a failure leaves the old one.
+ */
+export async function writeFileWhole(path: string, text: string): Promise<void> {
+  const staging = `${path}.partial-${process.pid}`;
+  try {
+    await writeFile(staging, text);
+    await rename(staging, path);
+  } catch (error) {
+    await rm(staging, { force: true });
+    throw new Error(`cannot write ${path}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
+  }
+}
