@@ -49,6 +49,7 @@ it("demo: builds in the worker, a clicked node opens its pane, and the export eq
     fileSize: Buffer.byteLength(csv),
     idColumn,
     outcomes,
+    reading: { format: "delimited", delimiter: "comma", decimal: ".", ragged: "reject" }, // the demo file: commas and decimal points, detected
   });
   expect(text("nodes.csv")).toBe(expected["nodes.csv"]);
   expect(text("members.csv")).toBe(expected["members.csv"]);
