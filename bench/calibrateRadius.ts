@@ -1,7 +1,7 @@
 // Radius for a target number of landmarks: bisection on log r for the greedy file-order net.
 import type { Metric, NumericTable } from "../src/core/index.ts";
 import { createRowIndex } from "../src/core/search/rowIndex.ts";
-import { greedyBalls } from "../src/core/search/greedyBalls.ts";
+import { greedyBalls } from "../src/core/landmark/greedyBalls.ts";
 
 export interface Calibration {
   readonly radius: number;

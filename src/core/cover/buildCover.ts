@@ -1,21 +1,22 @@
-import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
+import { ballMembership } from "../search/ballMembership.ts";
 import { blockMembershipInto } from "../search/blockMembership.ts";
-import { createListBuilder, transposeBuilt, type ListBuilder } from "../search/listBuilder.ts";
+import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
-import { components } from "../graph/components.ts";
-import { overlapEdges } from "../graph/overlapEdges.ts";
-import { Cancelled } from "../cancel.ts";
+import { components } from "../nerve/components.ts";
+import { overlapEdges } from "../nerve/overlapEdges.ts";
+import { Cancelled } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
-import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
-import { maximinBalls } from "../search/maximinBalls.ts";
+import { greedyBalls, type NetWithBalls } from "../landmark/greedyBalls.ts";
+import { maximinBalls } from "../landmark/maximinBalls.ts";
 import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
 import type { CoverGraph } from "./coverGraph.ts";
-import { prepareFeatures, type PreparedFeatures } from "./prepareFeatures.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule, type MissingPolicy } from "./params.ts";
-import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
+import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule, type MissingPolicy } from "../params.ts";
+import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 

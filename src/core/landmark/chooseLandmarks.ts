@@ -1,4 +1,4 @@
-import type { LandmarkRule } from "../cover/params.ts";
+import type { LandmarkRule } from "../params.ts";
 import type { Metric } from "../metric/types.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
 import type { NumericTable } from "../table/types.ts";

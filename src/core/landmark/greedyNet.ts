@@ -1,5 +1,5 @@
 import type { Metric } from "../metric/types.ts";
-import { greedyBalls } from "../search/greedyBalls.ts";
+import { greedyBalls } from "./greedyBalls.ts";
 import { maybeRowIndex, type RowIndex } from "../search/rowIndex.ts";
 import type { NumericTable } from "../table/types.ts";
 

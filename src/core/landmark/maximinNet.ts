@@ -1,5 +1,5 @@
 import type { Metric } from "../metric/types.ts";
-import { maximinBalls } from "../search/maximinBalls.ts";
+import { maximinBalls } from "./maximinBalls.ts";
 import { maybeRowIndex } from "../search/rowIndex.ts";
 import type { NumericTable } from "../table/types.ts";
 import type { NetOptions } from "./greedyNet.ts";

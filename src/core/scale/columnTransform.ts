@@ -1,5 +1,10 @@
 import type { NumericTable } from "../table/types.ts";
-import type { ScaledTable } from "./zScore.ts";
+
+export interface ScaledTable {
+  readonly table: NumericTable;
+  /** Names of columns that were constant (zero spread); they are set to 0. */
+  readonly constantColumns: readonly string[];
+}
 
 /**
  * Applies x ← (x − center) / spread per column, where `fit` gives (center, spread) from column j

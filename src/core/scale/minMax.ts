@@ -1,6 +1,6 @@
 import type { NumericTable } from "../table/types.ts";
 import { columnTransform } from "./columnTransform.ts";
-import type { ScaledTable } from "./zScore.ts";
+import type { ScaledTable } from "./columnTransform.ts";
 
 /**
  * Min–max scaling to [0, 1] per column: x' = (x − min) / (max − min).

@@ -1,7 +1,7 @@
 import { quantileSorted } from "../stats/quantileSorted.ts";
 import type { NumericTable } from "../table/types.ts";
 import { columnTransform } from "./columnTransform.ts";
-import type { ScaledTable } from "./zScore.ts";
+import type { ScaledTable } from "./columnTransform.ts";
 
 /**
  * Robust scaling per column: x' = (x − median) / IQR, IQR = Q(0.75) − Q(0.25), with quantiles of

@@ -1,8 +1,9 @@
-import type { ScaleName } from "../cover/params.ts";
+import type { ScaleName } from "../params.ts";
 import type { NumericTable } from "../table/types.ts";
 import { minMax } from "./minMax.ts";
 import { robust } from "./robust.ts";
-import { zScore, type ScaledTable } from "./zScore.ts";
+import type { ScaledTable } from "./columnTransform.ts";
+import { zScore } from "./zScore.ts";
 
 /**
  * Scales every column once, before any distance, then multiplies column j by its weight w_j

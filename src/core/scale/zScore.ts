@@ -1,11 +1,6 @@
 import type { NumericTable } from "../table/types.ts";
-import { columnTransform } from "./columnTransform.ts";
+import { columnTransform, type ScaledTable } from "./columnTransform.ts";
 
-export interface ScaledTable {
-  readonly table: NumericTable;
-  /** Names of columns that were constant (zero spread); they are set to 0. */
-  readonly constantColumns: readonly string[];
-}
 
 /**
  * Z-score scaling per column: z = (x − mean) / s, with s the sample standard deviation

@@ -1,8 +1,8 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 import type { KdTree } from "./kdTree.ts";
 import { boxBound } from "./boxBound.ts";
 import { scanLeaf } from "./leafScan.ts";
-import { closeLists, createListBuilder, finishLists, reserveLists, type ListBuilder } from "./listBuilder.ts";
+import { closeLists, createListBuilder, finishLists, reserveLists, type ListBuilder } from "../lists/listBuilder.ts";
 import { isInBall, judgeRadius, type RowIndex } from "./rowIndex.ts";
 import type { Norm } from "./searchSpace.ts";
 

@@ -1,6 +1,6 @@
 import { ballRows } from "../search/ballRows.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
+import { checkStop, type RunControl } from "../control.ts";
 
 /**
  * Number of landmarks of the greedy ε-net in file order (greedyNet's rule: a row becomes a

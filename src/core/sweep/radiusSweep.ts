@@ -1,13 +1,13 @@
 import type { ParsedTable } from "../table/types.ts";
-import type { RunControl } from "./runControl.ts";
+import type { RunControl } from "../control.ts";
 import { coverFigures } from "./coverFigures.ts";
 import type { SweepCover } from "./coverFromBalls.ts";
-import { defaultRange, defaultRangeRule } from "./defaultRange.ts";
+import { defaultRange, defaultRangeRule } from "../radius/defaultRange.ts";
 import { ascendingRadii, logSpacedRadii } from "./logSpacedRadii.ts";
-import type { Balls } from "./netWithBalls.ts";
-import { plateaus, type Plateau } from "./plateaus.ts";
-import { prepareRows, type PreparedRows, type SweepParams } from "./prepareRows.ts";
-import { suggestionRule, suggestStart, type StartSuggestion } from "./suggestStart.ts";
+import type { Balls } from "../landmark/netWithBalls.ts";
+import { plateaus, type Plateau } from "../radius/plateaus.ts";
+import { prepareRows, type PreparedRows, type SweepParams } from "../search/prepareRows.ts";
+import { suggestionRule, suggestStart, type StartSuggestion } from "../radius/plateauMiddle.ts";
 import { sweepCovers } from "./sweepCovers.ts";
 import { emptyFigures, setFigures, type SweepFigures } from "./sweepFigures.ts";
 

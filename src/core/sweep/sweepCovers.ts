@@ -1,9 +1,9 @@
-import type { LandmarkRule } from "../cover/params.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
+import type { LandmarkRule } from "../params.ts";
+import { checkStop, type RunControl } from "../control.ts";
 import { coverFromBalls, type SweepCover } from "./coverFromBalls.ts";
 import { isMaximinNet, maximinSequence, prefixBalls, type MaximinSequence } from "./maximinSequence.ts";
-import { netWithBalls, type Balls } from "./netWithBalls.ts";
-import type { PreparedRows } from "./prepareRows.ts";
+import { netWithBalls, type Balls } from "../landmark/netWithBalls.ts";
+import type { PreparedRows } from "../search/prepareRows.ts";
 
 /** Receives the cover at radius `index`, in parsed-table rows, and its balls in prepared-table rows. */
 export type CoverVisit = (index: number, cover: SweepCover, balls: Balls) => void;

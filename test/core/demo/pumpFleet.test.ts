@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildCover } from "../../../src/core/cover/buildCover.ts";
-import { suggestRadius } from "../../../src/core/cover/suggestRadius.ts";
+import { suggestRadius } from "../../../src/core/radius/defaultRadius.ts";
 import {
   generatePumpFleet, pumpDistricts, pumpFamilies, pumpFleetColumns, pumpFleetFeatures,
 } from "../../../src/core/demo/pumpFleet.ts";

@@ -1,5 +1,5 @@
-import { nerveTriangles } from "../../../src/core/graph/nerveTriangles.ts";
-import { rowsToNodes } from "../../../src/core/graph/ballMembership.ts";
+import { nerveTriangles } from "../../../src/core/nerve/nerveTriangles.ts";
+import { rowsToNodes } from "../../../src/core/lists/compressedLists.ts";
 // Sampled circles: N evenly spaced points on a unit circle, unscaled, Euclidean, greedy in file
 // order (point k at angle 2πk/N is row k), built with buildCover (scale "none").
 //

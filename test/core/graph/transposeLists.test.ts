@@ -1,7 +1,7 @@
 // transposeLists: node → item lists in chunks, items possibly renumbered, into row → node lists.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { rowsToNodes, transposeLists } from "../../../src/core/graph/ballMembership.ts";
+import { rowsToNodes, transposeLists } from "../../../src/core/lists/compressedLists.ts";
 
 const listsArbitrary = fc.integer({ min: 1, max: 30 }).chain((rows) =>
   fc.record({

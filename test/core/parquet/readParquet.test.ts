@@ -1,9 +1,9 @@
 import { readFileSync } from "node:fs";
 import { parquetMetadata, parquetReadObjects } from "hyparquet";
 import { describe, expect, it } from "vitest";
-import { isParquet } from "../../../src/core/parquet/isParquet.ts";
-import { parquetCompressors } from "../../../src/core/parquet/parquetCompressors.ts";
-import { readParquet } from "../../../src/core/parquet/readParquet.ts";
+import { isParquet } from "../../../src/core/table/parquet/isParquet.ts";
+import { parquetCompressors } from "../../../src/core/table/parquet/parquetCompressors.ts";
+import { readParquet } from "../../../src/core/table/parquet/readParquet.ts";
 import { missingCode } from "../../../src/core/table/finishColumn.ts";
 import { assertClose } from "../../assertClose.ts";
 

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { euclidean, manhattan, type NumericTable } from "../../../src/core/index.ts";
 import { blockMembership } from "../../../src/core/search/blockMembership.ts";
-import { firstHitNet } from "../../../src/core/search/firstHitNet.ts";
-import { greedyBalls } from "../../../src/core/search/greedyBalls.ts";
+import { firstHitNet } from "../../../src/core/landmark/firstHitNet.ts";
+import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
 import { scanLeaf } from "../../../src/core/search/leafScan.ts";
-import { maximinBalls } from "../../../src/core/search/maximinBalls.ts";
+import { maximinBalls } from "../../../src/core/landmark/maximinBalls.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { searchSpace } from "../../../src/core/search/searchSpace.ts";
 

@@ -1,7 +1,7 @@
 // listBuilder: lists appended into chunks and copied once must read back as their concatenation.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { appendList, createListBuilder, finishLists } from "../../../src/core/search/listBuilder.ts";
+import { appendList, createListBuilder, finishLists } from "../../../src/core/lists/listBuilder.ts";
 import { writeGroup } from "./support/listGroups.ts";
 
 describe("listBuilder", () => {

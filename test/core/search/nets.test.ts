@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { ballMembership, euclidean, greedyNet, maximinNet, randomSource, shuffledOrder } from "../../../src/core/index.ts";
-import { firstHitNet } from "../../../src/core/search/firstHitNet.ts";
-import { greedyBalls } from "../../../src/core/search/greedyBalls.ts";
-import { maximinBalls } from "../../../src/core/search/maximinBalls.ts";
+import { firstHitNet } from "../../../src/core/landmark/firstHitNet.ts";
+import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
+import { maximinBalls } from "../../../src/core/landmark/maximinBalls.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { plainBall, plainGreedy, plainMaximin } from "./support/plainSearch.ts";
 import { searchCase } from "./support/searchTables.ts";

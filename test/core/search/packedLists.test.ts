@@ -3,9 +3,9 @@
 // transposition must equal transposeLists of the plain lists.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { transposeLists } from "../../../src/core/graph/ballMembership.ts";
-import { appendList, createListBuilder, finishLists, transposeBuilt } from "../../../src/core/search/listBuilder.ts";
-import { createPackedStore, packList, packedPieces } from "../../../src/core/search/packedLists.ts";
+import { transposeLists } from "../../../src/core/lists/compressedLists.ts";
+import { appendList, createListBuilder, finishLists, transposeBuilt } from "../../../src/core/lists/listBuilder.ts";
+import { createPackedStore, packList, packedPieces } from "../../../src/core/lists/packedLists.ts";
 import { writeGroup } from "./support/listGroups.ts";
 
 /** Ascending lists with small gaps (one byte), large ones (up to five bytes) and values up to 2³² − 1. */

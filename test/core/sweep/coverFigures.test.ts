@@ -4,7 +4,7 @@ import { assertClose } from "../../assertClose.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { euclidean, parseCsvText } from "../../../src/core/index.ts";
 import { cappedGreedyCount } from "../../../src/core/sweep/cappedGreedyCount.ts";
-import { spanningForest } from "../../../src/core/sweep/spanningForest.ts";
+import { spanningForest } from "../../../src/core/nerve/spanningForest.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
 import { pointsTable } from "./support.ts";
 

@@ -5,8 +5,8 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { buildCover, parseCsvText } from "../../../src/core/index.ts";
-import { defaultRange } from "../../../src/core/sweep/defaultRange.ts";
-import { prepareRows } from "../../../src/core/sweep/prepareRows.ts";
+import { defaultRange } from "../../../src/core/radius/defaultRange.ts";
+import { prepareRows } from "../../../src/core/search/prepareRows.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
 import { pointsTable } from "./support.ts";
 

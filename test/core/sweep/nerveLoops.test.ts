@@ -3,9 +3,9 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { components, nerveBetti, nerveTriangles, overlapEdges, type CompressedLists } from "../../../src/core/index.ts";
-import { forEachFanTriangle } from "../../../src/core/sweep/fanTriangles.ts";
-import { nerveLoops } from "../../../src/core/sweep/nerveLoops.ts";
-import { peeledRank } from "../../../src/core/sweep/peeledRank.ts";
+import { forEachFanTriangle } from "../../../src/core/nerve/fanTriangles.ts";
+import { nerveLoops } from "../../../src/core/nerve/nerveLoops.ts";
+import { peeledRank } from "../../../src/core/nerve/peeledRank.ts";
 
 /** Row → nodes lists (each row's nodes sorted, duplicates dropped) from plain arrays. */
 const rowLists = (rows: readonly (readonly number[])[]): CompressedLists => {

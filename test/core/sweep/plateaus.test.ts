@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { assertClose } from "../../assertClose.ts";
 import { ascendingRadii, logSpacedRadii } from "../../../src/core/sweep/logSpacedRadii.ts";
-import { plateaus } from "../../../src/core/sweep/plateaus.ts";
-import { suggestStart } from "../../../src/core/sweep/suggestStart.ts";
+import { plateaus } from "../../../src/core/radius/plateaus.ts";
+import { suggestStart } from "../../../src/core/radius/plateauMiddle.ts";
 
 describe("plateaus of unchanged b0 and b1", () => {
   it("radii 1, 2, 4, 8 with b0 1, 1, 1, 2 give runs 0..2 (width 2.5 ln 2) and 3..3 (width 0.5 ln 2)", () => {

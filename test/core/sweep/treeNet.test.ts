@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { chebyshev, euclidean, greedyNet, manhattan, type NumericTable } from "../../../src/core/index.ts";
-import { createNetTree } from "../../../src/core/sweep/netTree.ts";
-import { treeNet } from "../../../src/core/sweep/treeNet.ts";
+import { createNetTree } from "../../../src/core/landmark/netTree.ts";
+import { treeNet } from "../../../src/core/landmark/treeNet.ts";
 
 // 1..80 rows of 1..4 columns of halves −3..3: exact squared sums, so ties d = r are common.
 const table: fc.Arbitrary<NumericTable> = fc.record({ rows: fc.integer({ min: 1, max: 80 }), columns: fc.integer({ min: 1, max: 4 }) }).chain(({ rows, columns }) =>

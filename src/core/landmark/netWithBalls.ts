@@ -1,11 +1,12 @@
-import type { LandmarkRule } from "../cover/params.ts";
-import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import type { LandmarkRule } from "../params.ts";
+import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
+import { ballMembership } from "../search/ballMembership.ts";
 import { randomSource, shuffledOrder } from "../random.ts";
 import { ballRows } from "../search/ballRows.ts";
-import { appendList, createListBuilder, finishLists } from "../search/listBuilder.ts";
-import { maximinBalls } from "../search/maximinBalls.ts";
+import { appendList, createListBuilder, finishLists } from "../lists/listBuilder.ts";
+import { maximinBalls } from "./maximinBalls.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
+import { checkStop, type RunControl } from "../control.ts";
 
 /** Landmarks and balls of one radius, on the rows of a prepared table. */
 export interface Balls {

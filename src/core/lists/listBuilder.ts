@@ -1,4 +1,4 @@
-import { transposeLists, type CompressedLists } from "../graph/ballMembership.ts";
+import { transposeLists, type CompressedLists } from "./compressedLists.ts";
 import { createPackedStore, packList, transposePacked, unpackLists, type PackedStore } from "./packedLists.ts";
 
 /**

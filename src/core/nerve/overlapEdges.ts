@@ -1,4 +1,4 @@
-import { rowsToNodes, type CompressedLists } from "./ballMembership.ts";
+import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
 
 export interface EdgeList {
   /** 0-based node numbers with source < target, sorted by (source, target). */

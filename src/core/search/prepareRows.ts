@@ -1,10 +1,10 @@
-import { prepareFeatures, type PreparedFeatures } from "../cover/prepareFeatures.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "../cover/params.ts";
+import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams } from "../params.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
-import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
+import { createRowIndex, type RowIndex } from "./rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
+import { checkStop, type RunControl } from "../control.ts";
 
 /** Every cover parameter but the radius: what a sweep holds fixed. */
 export type SweepParams = Omit<CoverParams, "radius">;

@@ -1,4 +1,4 @@
-import { symmetricDifference } from "../graph/symmetricDifference.ts";
+import { symmetricDifference } from "./symmetricDifference.ts";
 /**
  * Rank over GF(2) of a sparse 0/1 matrix whose columns hold at most three row indices
  * (`columns[3t..3t+2]`, −1 for an empty slot; a row index appears at most once per column).

@@ -1,4 +1,4 @@
-import type { CompressedLists } from "./ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /**
  * Lists every triangle; builds use nerveLoops, which needs only fan triangles. Kept as the

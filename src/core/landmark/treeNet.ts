@@ -1,4 +1,4 @@
-import { checkStop, type RunControl } from "./runControl.ts";
+import { checkStop, type RunControl } from "../control.ts";
 import { addLevel, insertLandmark, searchLevel, type NetTree } from "./netTree.ts";
 
 // A new level hangs under the finest level at least this many times its radius (cover trees use a

@@ -1,5 +1,5 @@
-import type { RowIndex } from "./rowIndex.ts";
-import type { Norm } from "./searchSpace.ts";
+import type { RowIndex } from "../search/rowIndex.ts";
+import type { Norm } from "../search/searchSpace.ts";
 
 export interface FirstHitOptions {
   /** First position of `order` to visit (default 0). */

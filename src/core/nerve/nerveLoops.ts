@@ -1,6 +1,6 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
-import type { EdgeList } from "../graph/overlapEdges.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
+import type { EdgeList } from "./overlapEdges.ts";
+import { checkStop, type RunControl } from "../control.ts";
 import { forEachFanTriangle } from "./fanTriangles.ts";
 import { peeledRank } from "./peeledRank.ts";
 import { spanningForest } from "./spanningForest.ts";

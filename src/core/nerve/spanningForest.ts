@@ -1,4 +1,4 @@
-import type { EdgeList } from "../graph/overlapEdges.ts";
+import type { EdgeList } from "./overlapEdges.ts";
 
 /**
  * Breadth-first spanning forest of a graph (one tree per connected component, each grown from

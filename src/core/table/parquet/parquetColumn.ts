@@ -1,5 +1,5 @@
 import type { SchemaElement } from "hyparquet";
-import { ColumnBuilder } from "../table/columnBuilder.ts";
+import { ColumnBuilder } from "../columnBuilder.ts";
 
 const timeTypes = new Set(["DATE", "TIME", "TIMESTAMP", "TIME_MILLIS", "TIME_MICROS", "TIMESTAMP_MILLIS", "TIMESTAMP_MICROS"]);
 

@@ -1,8 +1,8 @@
-import { checkStop, type RunControl } from "./runControl.ts";
-import { cappedGreedyCount } from "./cappedGreedyCount.ts";
-import { createNetTree } from "./netTree.ts";
-import type { PreparedRows } from "./prepareRows.ts";
-import { treeNet } from "./treeNet.ts";
+import { checkStop, type RunControl } from "../control.ts";
+import { cappedGreedyCount } from "../sweep/cappedGreedyCount.ts";
+import { createNetTree } from "../landmark/netTree.ts";
+import type { PreparedRows } from "../search/prepareRows.ts";
+import { treeNet } from "../landmark/treeNet.ts";
 
 export const rangeFewestNodes = 3; // "a handful of nodes" at the top of the range (issue 6)
 export const rangeMostNodes = 2000; // "at most about 2,000 nodes" at the bottom (issue 6): still drawable, a sweep in seconds

@@ -1,9 +1,9 @@
 import { parquetMetadata, parquetRead, parquetSchema, type ColumnData, type FileMetaData } from "hyparquet";
-import { finishColumn } from "../table/finishColumn.ts";
-import { maxInputBytes } from "../table/readOptions.ts";
-import type { ColumnReport, Notice, ReadOutcome } from "../table/tableReport.ts";
-import { tableNotices } from "../table/tableOutcome.ts";
-import type { TableColumn } from "../table/types.ts";
+import { finishColumn } from "../finishColumn.ts";
+import { maxInputBytes } from "../readOptions.ts";
+import type { ColumnReport, Notice, ReadOutcome } from "../tableReport.ts";
+import { tableNotices } from "../tableOutcome.ts";
+import type { TableColumn } from "../types.ts";
 import { isParquet } from "./isParquet.ts";
 import { parquetColumn, pushParquetValue, type ParquetColumn } from "./parquetColumn.ts";
 import { parquetCompressors } from "./parquetCompressors.ts";

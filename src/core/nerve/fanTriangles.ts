@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /**
  * Visits, once each, the fan triangles of the sampled nerve: for every row with balls

@@ -1,41 +1,7 @@
-import type { NetOptions } from "../landmark/greedyNet.ts";
-import type { Metric } from "../metric/types.ts";
-import { ballRows } from "../search/ballRows.ts";
-import { blockMembership } from "../search/blockMembership.ts";
-import { appendList, createListBuilder, finishLists } from "../search/listBuilder.ts";
-import { maybeRowIndex } from "../search/rowIndex.ts";
-import type { NumericTable } from "../table/types.ts";
-
 /** Compressed lists: the items of list k are items[offsets[k] .. offsets[k + 1]). */
 export interface CompressedLists {
   readonly offsets: Uint32Array;
   readonly items: Uint32Array;
-}
-
-/**
- * Closed balls around landmarks: row i is a member of node k iff d(landmark_k, i) ≤ r
- * (reference predicate). Members of each node are listed in ascending row order.
- * O(n·L) distance tests at worst; a candidate index (search/blockMembership.ts, reusable through
- * `options.index`) skips rows it proves the predicate rejects.
- * @example ballMembership(line0to3, euclidean, 1, Uint32Array.of(0, 2)) // => offsets [0, 2, 5], items [0, 1, 1, 2, 3]
- */
-export function ballMembership(
-  table: NumericTable,
-  metric: Metric,
-  radius: number,
-  landmarks: Uint32Array,
-  onProgress?: (done: number, total: number) => void,
-  options: NetOptions = {},
-): CompressedLists {
-  const builder = createListBuilder(table.rows);
-  if (landmarks.length === 0) return finishLists(builder);
-  const index = maybeRowIndex(table, metric, options.index);
-  if (index.tree) return blockMembership(index, radius, landmarks, onProgress);
-  for (let k = 0; k < landmarks.length; ++k) {
-    appendList(builder, ballRows(index, landmarks[k]!, radius));
-    if (onProgress && (k & 63) === 63) onProgress(k + 1, landmarks.length);
-  }
-  return finishLists(builder);
 }
 
 /**

@@ -1,8 +1,8 @@
 import { greedyNet } from "../landmark/greedyNet.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { NumericTable, ParsedTable } from "../table/types.ts";
-import type { CoverParams } from "./params.ts";
-import { prepareFeatures } from "./prepareFeatures.ts";
+import type { CoverParams } from "../params.ts";
+import { prepareFeatures } from "../scale/prepareFeatures.ts";
 
 export type RadiusBasis = Pick<CoverParams, "features" | "metric" | "scale"> & Partial<Pick<CoverParams, "weights" | "missing" | "oneHot">>;
 

@@ -1,10 +1,10 @@
 import type { Metric } from "../metric/types.ts";
-import { scaleTable } from "../scale/scaleTable.ts";
+import { scaleTable } from "./scaleTable.ts";
 import { oneHot } from "../table/oneHot.ts";
 import { selectFeatures } from "../table/selectFeatures.ts";
 import type { NumericTable, ParsedTable, TableColumn } from "../table/types.ts";
 import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
-import type { CoverParams, MissingPolicy } from "./params.ts";
+import type { CoverParams, MissingPolicy } from "../params.ts";
 
 export interface PreparedFeatures {
   /** Row-major: the scaled and weighted numeric features, then the one-hot indicators. */

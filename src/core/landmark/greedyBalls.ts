@@ -1,8 +1,8 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
-import { ballRows } from "./ballRows.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
+import { ballRows } from "../search/ballRows.ts";
 import { firstHitNet } from "./firstHitNet.ts";
-import { appendList, createListBuilder, finishLists, type ListBuilder } from "./listBuilder.ts";
-import type { RowIndex } from "./rowIndex.ts";
+import { appendList, createListBuilder, finishLists, type ListBuilder } from "../lists/listBuilder.ts";
+import type { RowIndex } from "../search/rowIndex.ts";
 
 export interface GreedyBallsOptions {
   /** Keep each landmark's ball (default true). */

@@ -1,4 +1,7 @@
-import type { MetricName } from "../metric/types.ts";
+// Parameter names and types of a cover, and their normalizers; this module imports nothing.
+
+/** Names of the metrics Shoal knows; one module per metric under core/metric/. */
+export type MetricName = "euclidean" | "manhattan" | "chebyshev" | "cosine" | "correlation";
 
 export type ScaleName = "none" | "zscore" | "minmax" | "robust";
 export type LandmarkRule = "greedy-file-order" | "greedy-shuffled" | "maximin";

@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "./compressedLists.ts";
 
 /**
  * Ascending lists of integers below 2³² stored as gaps (the first value, then each value minus

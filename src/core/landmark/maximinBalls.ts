@@ -1,7 +1,7 @@
-import { appendList, createListBuilder, finishLists } from "./listBuilder.ts";
-import { ballRows } from "./ballRows.ts";
-import { relaxNearest } from "./relaxNearest.ts";
-import type { RowIndex } from "./rowIndex.ts";
+import { appendList, createListBuilder, finishLists } from "../lists/listBuilder.ts";
+import { ballRows } from "../search/ballRows.ts";
+import { relaxNearest } from "../search/relaxNearest.ts";
+import type { RowIndex } from "../search/rowIndex.ts";
 import type { NetWithBalls } from "./greedyBalls.ts";
 
 export interface MaximinBallsOptions {
