@@ -1,6 +1,6 @@
 import { mkdir, rename, rm, stat, writeFile } from "node:fs/promises";
 import { join } from "node:path";
-import { buildCover, coverExports, featureWeights, suggestRadius, type CoverParams } from "../core/index.ts";
+import { buildCover, coverExports, featureWeights, defaultRadius, type CoverParams } from "../core/index.ts";
 import { resolveFeatures } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readInput } from "./readInput.ts";
@@ -21,7 +21,7 @@ export async function runBuild(command: BuildCommand): Promise<string> {
   const oneHot = command.params.oneHot ?? [];
   const weights = featureWeights([...features, ...oneHot], command.params.weights ?? {});
   const encoded = oneHot.length > 0 ? { oneHot } : {};
-  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights, ...encoded });
+  const radius = command.radius ?? defaultRadius(table, { features, scale, metric, missing, weights, ...encoded });
   if (!(radius > 0)) throw new Error("no default radius: the rows do not differ in the chosen columns");
   // the same key order as the workbench's parameters, so both summaries read alike
   const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights, ...encoded };

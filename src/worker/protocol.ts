@@ -20,6 +20,8 @@ export interface SweepRange {
   readonly radiusMin?: number;
   readonly radiusMax?: number;
   readonly steps: number;
+  /** The radius on screen; the default range is widened to contain it unless that passes its node budget. */
+  readonly current?: number;
 }
 
 /**

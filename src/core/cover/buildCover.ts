@@ -1,17 +1,16 @@
 import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
-import { ballMembership } from "../search/ballMembership.ts";
 import { blockMembershipInto } from "../search/blockMembership.ts";
 import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
 import { overlapEdges } from "../nerve/overlapEdges.ts";
-import { Cancelled } from "../control.ts";
+import { Cancelled, type RunControl } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
-import { randomSource, shuffledOrder } from "../random.ts";
-import { greedyBalls, type NetWithBalls } from "../landmark/greedyBalls.ts";
-import { maximinBalls } from "../landmark/maximinBalls.ts";
-import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
+import { greedyBalls } from "../landmark/greedyBalls.ts";
+import { landmarkBalls } from "../landmark/netWithBalls.ts";
+import { visitOrder } from "../landmark/visitOrder.ts";
+import { createRowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
 import type { CoverGraph } from "./coverGraph.ts";
 import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
@@ -157,7 +156,7 @@ function landmarksAndBalls(
   const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
   const n = table.rows;
-  const netProgress = (done: number, total: number): void => onProgress?.("landmarks", done / total);
+  const phase = (name: BuildPhase): RunControl => ({ ...(shouldStop ? { shouldStop } : {}), onProgress: (fraction) => onProgress?.(name, fraction) });
   const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
 
   onProgress?.("landmarks", 0);
@@ -165,9 +164,9 @@ function landmarksAndBalls(
   const ordered = rule === "maximin" ? null : treeOrderIndex(table, metric, indexOptions); // `table` is rearranged from here on
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;
-    // visit the rows in file order (or the seed's order) at their tree positions
+    // visit the rows in the rule's order (visitOrder), at their tree positions
     let lists = createListBuilder(n, { packed: true });
-    const net = greedyBalls(index, params.radius, visitOrder(rowAt, rule, params.seed), { onProgress: netProgress, into: lists });
+    const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...phase("landmarks"), into: lists });
     const landmarkTime = lap();
     onProgress?.("members", 0);
     if (lists.offsets.length - 1 === net.landmarks.length) {
@@ -175,7 +174,7 @@ function landmarksAndBalls(
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
       lists = createListBuilder(n, { packed: true });
-      blockMembershipInto(lists, index, params.radius, net.landmarks, membersProgress);
+      blockMembershipInto(lists, index, params.radius, net.landmarks, phase("members"));
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
     // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
@@ -185,22 +184,20 @@ function landmarksAndBalls(
     return { centers, balls: { kind: "positions", lists, rowAt, spare }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
-  const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
+  // the net's share of progress goes to "landmarks"; balls it did not keep are found inside
+  const net = landmarkBalls(index, params.radius, rule, params.seed, { ...phase("landmarks"), firstHit: true, what: "the build" });
   const centers = net.landmarks;
   const landmarkTime = lap();
   onProgress?.("members", 0);
-  const lists = net.members ?? ballMembership(index.table, metric, params.radius, centers, membersProgress, { index });
-  if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
-  return { centers, balls: { kind: "rows", lists }, prepared, scaleTime, landmarkTime };
+  for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
+  return { centers, balls: { kind: "rows", lists: net.members }, prepared, scaleTime, landmarkTime };
 }
 
-/** Tree positions of the rows in file order, or in the order shuffled by the seed (a new array the net alone holds). */
-function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint32Array {
+/** The visit order with each row replaced by its tree position (in place; the order is the caller's own). */
+function atTreePositions(order: Uint32Array, rowAt: Uint32Array): Uint32Array {
   const n = rowAt.length;
   const positionOf = new Uint32Array(n);
   for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
-  if (rule !== "greedy-shuffled") return positionOf;
-  const order = shuffledOrder(n, randomSource(seed));
   for (let k = 0; k < n; ++k) order[k] = positionOf[order[k]!]!;
   return order;
 }
@@ -208,15 +205,4 @@ function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint3
 /** For each row, the nodes whose balls hold it, ascending. */
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
   return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
-}
-
-/** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */
-function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule, seed: number, onProgress: (fraction: number) => void): NetWithBalls {
-  const n = index.table.rows;
-  if (rule === "maximin") {
-    if (n === 0) return { landmarks: new Uint32Array(0), members: { offsets: Uint32Array.of(0), items: new Uint32Array(0) } };
-    return maximinBalls(index, radius, Math.floor(randomSource(seed)() * n), { onProgress: (done, total) => onProgress(done / total) });
-  }
-  const order = rule === "greedy-shuffled" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
-  return greedyBalls(index, radius, order, { onProgress: (done, total) => onProgress(done / total) });
 }

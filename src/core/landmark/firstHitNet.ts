@@ -1,12 +1,13 @@
+import { checkStop, type RunControl } from "../control.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
 import type { Norm } from "../search/searchSpace.ts";
 
-export interface FirstHitOptions {
+/** Progress is the share of `order` visited, reported every 256 rows; a `shouldStop` is asked as often. */
+export interface FirstHitOptions extends RunControl {
   /** First position of `order` to visit (default 0). */
   from?: number;
   /** Rows already covered by earlier landmarks (they are skipped); default none. */
   covered?: Uint8Array;
-  onProgress?: (done: number, total: number) => void;
   /** Stop as soon as more than this many landmarks were chosen here (default no limit). */
   maxLandmarks?: number;
 }
@@ -51,7 +52,10 @@ export function firstHitNet(index: RowIndex, radius: number, order: ArrayLike<nu
       landmarks.push(i);
       if (landmarks.length > maxLandmarks) break;
     }
-    if (onProgress && (k & 255) === 255) onProgress(k + 1, order.length);
+    if ((k & 255) === 255) {
+      checkStop(options, "the landmark net");
+      onProgress?.((k + 1) / order.length);
+    }
   }
   return Uint32Array.from(landmarks);
 }

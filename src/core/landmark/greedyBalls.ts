@@ -1,13 +1,19 @@
+import { checkStop, type RunControl } from "../control.ts";
 import type { CompressedLists } from "../lists/compressedLists.ts";
 import { ballRows } from "../search/ballRows.ts";
 import { firstHitNet } from "./firstHitNet.ts";
 import { appendList, createListBuilder, finishLists, type ListBuilder } from "../lists/listBuilder.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
 
-export interface GreedyBallsOptions {
+/** Progress is the share of `order` visited, reported every 256 rows; a `shouldStop` is asked as often. */
+export interface GreedyBallsOptions extends RunControl {
   /** Keep each landmark's ball (default true). */
   balls?: boolean;
-  onProgress?: (done: number, total: number) => void;
+  /**
+   * Finish with first-hit tests (firstHitNet.ts) once ball queries prove costly (default true).
+   * False keeps one ball query per landmark to the end, which the sweep prefers.
+   */
+  firstHit?: boolean;
   /** Stop as soon as the net has more than this many landmarks (for radius searches; default no limit). */
   maxLandmarks?: number;
   /**
@@ -40,7 +46,7 @@ export interface NetWithBalls {
  * @example greedyBalls(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 1, 2, 3)).landmarks // => Uint32Array [0, 2]
  */
 export function greedyBalls(index: RowIndex, radius: number, order: ArrayLike<number>, options: GreedyBallsOptions = {}): NetWithBalls {
-  const { balls = true, onProgress, maxLandmarks = Infinity, into } = options;
+  const { balls = true, firstHit = true, onProgress, maxLandmarks = Infinity, into } = options;
   const n = index.table.rows;
   const covered = new Uint8Array(n);
   const landmarks: number[] = [];
@@ -56,12 +62,15 @@ export function greedyBalls(index: RowIndex, radius: number, order: ArrayLike<nu
       if (builder) appendList(builder, ball);
       if (landmarks.length > maxLandmarks) break;
       const queries = index.stats.queries - before.queries;
-      if (queries >= probe && index.stats.scanned - before.scanned > (queries * n) / 16) {
-        const rest = firstHitNet(index, radius, order, { from: k + 1, covered, maxLandmarks: maxLandmarks - landmarks.length, ...(onProgress ? { onProgress } : {}) });
+      if (firstHit && queries >= probe && index.stats.scanned - before.scanned > (queries * n) / 16) {
+        const rest = firstHitNet(index, radius, order, { ...options, from: k + 1, covered, maxLandmarks: maxLandmarks - landmarks.length });
         return { landmarks: Uint32Array.from([...landmarks, ...rest]), members: null };
       }
     }
-    if (onProgress && (k & 255) === 255) onProgress(k + 1, order.length);
+    if ((k & 255) === 255) {
+      checkStop(options, "the landmark net");
+      onProgress?.((k + 1) / order.length);
+    }
   }
   return { landmarks: Uint32Array.from(landmarks), members: builder && !into ? finishLists(builder) : null };
 }

@@ -1,13 +1,14 @@
+import { checkStop, type RunControl } from "../control.ts";
 import { appendList, createListBuilder, finishLists } from "../lists/listBuilder.ts";
 import { ballRows } from "../search/ballRows.ts";
 import { relaxNearest } from "../search/relaxNearest.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
 import type { NetWithBalls } from "./greedyBalls.ts";
 
-export interface MaximinBallsOptions {
+/** Progress is the share of rows covered, reported after each landmark; a `shouldStop` is asked as often. */
+export interface MaximinBallsOptions extends RunControl {
   /** Also return each landmark's ball (default true). */
   balls?: boolean;
-  onProgress?: (covered: number, total: number) => void;
 }
 
 /**
@@ -57,7 +58,8 @@ export function maximinBalls(index: RowIndex, radius: number, start: number, opt
       next = i;
     }
     uncovered = uncovered.subarray(0, kept);
-    onProgress?.(coveredCount, n);
+    checkStop(options, "the landmark net");
+    onProgress?.(coveredCount / n);
   }
   return { landmarks: Uint32Array.from(landmarks), members: builder && finishLists(builder) };
 }

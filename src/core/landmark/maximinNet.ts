@@ -5,7 +5,8 @@ import type { NumericTable } from "../table/types.ts";
 import type { NetOptions } from "./greedyNet.ts";
 
 /**
- * Maximin (farthest-point) r-net: start at `start`; repeatedly add the row farthest from all
+ * Maximin (farthest-point) r-net of a table: maximinBalls (the one maximin loop) on the table's
+ * index, without the balls. Start at `start`; repeatedly add the row farthest from all
  * landmarks so far (largest distance to its nearest landmark; ties to the lowest row), until
  * every row is within r of a landmark. "Within" is decided by the metric's reference predicate,
  * distances only rank the candidates, so the result is an r-net under the predicate: every row
@@ -19,12 +20,11 @@ export function maximinNet(
   metric: Metric,
   radius: number,
   start: number,
-  onProgress?: (covered: number, total: number) => void,
   options: NetOptions = {},
 ): Uint32Array {
   if (!(radius > 0) || !Number.isFinite(radius)) throw new Error(`invalid radius: ${radius}`);
   if (table.rows === 0) return new Uint32Array(0);
   if (!(start >= 0 && start < table.rows)) throw new Error(`invalid start row: ${start}`);
-  const index = maybeRowIndex(table, metric, options.index);
-  return maximinBalls(index, radius, start, { balls: false, ...(onProgress ? { onProgress } : {}) }).landmarks;
+  const { index, ...control } = options;
+  return maximinBalls(maybeRowIndex(table, metric, index), radius, start, { ...control, balls: false }).landmarks;
 }

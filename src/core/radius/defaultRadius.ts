@@ -1,43 +1,52 @@
-import { greedyNet } from "../landmark/greedyNet.ts";
+import { checkStop, type RunControl } from "../control.ts";
+import { greedyBalls } from "../landmark/greedyBalls.ts";
 import { maybeMetric } from "../metric/metrics.ts";
-import type { NumericTable, ParsedTable } from "../table/types.ts";
 import type { CoverParams } from "../params.ts";
 import { prepareFeatures } from "../scale/prepareFeatures.ts";
+import { createRowIndex } from "../search/rowIndex.ts";
+import type { NumericTable, ParsedTable } from "../table/types.ts";
+import { farthestFromFirst } from "./farthestFromFirst.ts";
+import { logBisect } from "./logBisect.ts";
+import { roundUpSignificant } from "./roundUpSignificant.ts";
 
 export type RadiusBasis = Pick<CoverParams, "features" | "metric" | "scale"> & Partial<Pick<CoverParams, "weights" | "missing" | "oneHot">>;
 
-export const suggestionSampleSize = 4000; // rows probed; keeps the search well under a second
-export const suggestionMinNodes = 30;
-export const suggestionMaxNodes = 150;
+export const defaultRadiusSampleSize = 4000; // rows probed; keeps the search well under a second
+export const defaultRadiusFewestNodes = 30; // common practice, no source: a graph worth looking at
+export const defaultRadiusMostNodes = 150; // common practice, no source: still readable on screen
+const bisectionSteps = 30; // a bracket of a factor 10⁴ ends within a factor 1 + 1e-8
 
 /**
- * Default radius rule: with m complete rows, aim for T = clamp(round(1.5·√m), min(30, ⌈m/5⌉), 150)
- * landmarks (so a small table opens on about one node per five rows, not on one node per two).
- * Take at most 4,000 rows evenly strided through the scaled and weighted table, bisect log(r) (30 steps)
- * between hi = 2 · max distance from the first row (≥ the diameter, so one landmark) and
- * hi / 10⁴, and return the smallest probed radius whose greedy file-order net on those rows
- * has at most T landmarks, rounded up to 3 significant digits. Deterministic.
- * Returns NaN when fewer than two distinct rows exist (no radius separates anything).
+ * Default radius (landmark-count rule): with m complete rows, aim for
+ * T = clamp(round(1.5·√m), min(30, ⌈m/5⌉), 150) landmarks (so a small table opens on about one
+ * node per five rows, not on one node per two). Take at most 4,000 rows evenly strided through
+ * the scaled and weighted table, index them once, bisect log(r) (30 steps, logBisect.ts) between
+ * hi = 2 · max distance from the first row (≥ the diameter, so one landmark) and hi / 10⁴, and
+ * return the smallest probed radius whose greedy file-order net on those rows has at most T
+ * landmarks, rounded up to 3 significant digits. Deterministic. Progress and cancellation by
+ * `control` (one report per step).
+ * Throws when fewer than two distinct rows exist (farthestFromFirst.ts), since no radius separates anything.
+ * @example defaultRadius(two rows x = 1, 2, { features: ["x"], scale: "zscore", metric: "euclidean" }) // => 0.000283
  */
-export function suggestRadius(parsed: ParsedTable, params: RadiusBasis): number {
+export function defaultRadius(parsed: ParsedTable, params: RadiusBasis, control: RunControl = {}): number {
   const metric = maybeMetric(params.metric);
-  const scaled = prepareFeatures(parsed, params, metric, params.missing ?? "drop").table;
+  const what = "the default radius";
+  const scaled = prepareFeatures(parsed, params, metric, params.missing ?? "drop", () => checkStop(control, what)).table;
   const m = scaled.rows;
-  if (m < 2) return NaN;
-  const target = Math.min(suggestionMaxNodes, Math.max(Math.min(suggestionMinNodes, Math.ceil(m / 5)), Math.round(1.5 * Math.sqrt(m))));
-  const sample = stridedRows(scaled, suggestionSampleSize);
-  let far = 0;
-  for (let i = 1; i < sample.rows; ++i) far = Math.max(far, metric.distance(sample.values, sample.columns, 0, i));
-  if (!(far > 0)) return NaN;
-  const order = new Uint32Array(sample.rows).map((_, i) => i);
-  let hi = 2 * far;
-  let lo = hi / 1e4;
-  for (let step = 0; step < 30; ++step) {
-    const mid = Math.sqrt(lo * hi);
-    if (greedyNet(sample, metric, mid, order).length <= target) hi = mid;
-    else lo = mid;
-  }
-  return roundUpSignificant(hi, 3);
+  const target = Math.min(defaultRadiusMostNodes, Math.max(Math.min(defaultRadiusFewestNodes, Math.ceil(m / 5)), Math.round(1.5 * Math.sqrt(m))));
+  const sample = stridedRows(scaled, defaultRadiusSampleSize);
+  const hi = 2 * farthestFromFirst(sample, metric);
+  const index = createRowIndex(sample, metric, { onStep: () => checkStop(control, what) });
+  const order = Uint32Array.from({ length: sample.rows }, (_, i) => i);
+  let step = 0;
+  const found = logBisect(hi / 1e4, hi, bisectionSteps, (radius) => {
+    checkStop(control, what);
+    control.onProgress?.(step++ / bisectionSteps);
+    // the net stops past T landmarks: only "at most T or not" matters
+    return greedyBalls(index, radius, order, { balls: false, maxLandmarks: target }).landmarks.length <= target;
+  });
+  control.onProgress?.(1);
+  return roundUpSignificant(found.hi, 3);
 }
 
 function stridedRows(table: NumericTable, limit: number): NumericTable {
@@ -49,9 +58,4 @@ function stridedRows(table: NumericTable, limit: number): NumericTable {
     values.set(table.values.subarray(i * d, i * d + d), k * d);
   }
   return { ...table, rows: limit, values };
-}
-
-function roundUpSignificant(x: number, digits: number): number {
-  const scale = 10 ** (digits - 1 - Math.floor(Math.log10(x)));
-  return Math.ceil(x * scale) / scale;
 }

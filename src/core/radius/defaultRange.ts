@@ -1,8 +1,11 @@
 import { checkStop, type RunControl } from "../control.ts";
-import { cappedGreedyCount } from "../sweep/cappedGreedyCount.ts";
+import { greedyBalls } from "../landmark/greedyBalls.ts";
 import { createNetTree } from "../landmark/netTree.ts";
 import type { PreparedRows } from "../search/prepareRows.ts";
 import { treeNet } from "../landmark/treeNet.ts";
+import { farthestFromFirst } from "./farthestFromFirst.ts";
+import { logBisect } from "./logBisect.ts";
+import { roundUpSignificant } from "./roundUpSignificant.ts";
 
 export const rangeFewestNodes = 3; // "a handful of nodes" at the top of the range (issue 6)
 export const rangeMostNodes = 2000; // "at most about 2,000 nodes" at the bottom (issue 6): still drawable, a sweep in seconds
@@ -17,31 +20,42 @@ export interface RadiusRange {
 }
 
 export const defaultRangeRule =
-  "largest radius: the smallest found at which the greedy net in file order has at most 3 nodes; smallest radius: the smallest found at which it has at most " +
-  "T = min(2000, max(6, floor(m/5))) nodes for m rows used (fewer when the rows hold fewer distinct points); each found by halving r from the largest distance " +
-  "to the first row, then 6 bisection steps in log r, and rounded up to 3 significant digits when that keeps the node count within its limit";
+  "The largest radius is the smallest one tried at which the graph has at most 3 nodes. " +
+  "The smallest radius is the smallest one tried at which the graph has at most min(2000, max(6, m/5)) nodes, m being the number of rows used " +
+  "(fewer when the rows hold fewer distinct points). For this rule the graph's landmarks are picked in file order. " +
+  "Both ends are found by halving the radius from the largest distance to the first row and then narrowing down, and are rounded up to 3 significant digits. " +
+  "The range is widened to include the current radius, unless the graph there would have more nodes than the smallest radius allows.";
+
+export interface RangeOptions extends RunControl {
+  /** The radius of the graph on screen: the range is widened to contain it unless it would pass the node budget there. */
+  readonly current?: number;
+}
 
 /**
  * Default radius range of a sweep, from the data (rule in `defaultRangeRule`). Counts greedy
- * nets in file order, each stopped once it exceeds its budget; under a true metric the halving
- * nets are kept as the levels of a net tree (netTree.ts) through which later nets are grown.
- * Throws when fewer than two distinct rows (or too few distinct points for a range) exist.
+ * nets in file order (greedyBalls, the one greedy loop), each stopped once it exceeds its budget;
+ * under a true metric the halving nets are kept as the levels of a net tree
+ * (landmark/netTree.ts) through which later nets are grown (treeNet, the same net). Each end is
+ * bracketed by halving and narrowed by log-bisection (logBisect.ts). A current radius outside
+ * the range moves the nearer end to it when its net stays within the range's node budget
+ * (at most `mostNodes` landmarks); otherwise the range is left as it is.
+ * Throws when fewer than two distinct rows (farthestFromFirst.ts) or too few distinct points for a range exist.
  * Cost: O(log(d_far / r_min) + 16) capped nets.
  * @example defaultRange(prepareRows(demo pump fleet, its 10 numeric features, zscore, euclidean)) // => { min: 0.206, max: 5.48, mostNodes: 469 }
  */
-export function defaultRange(prepared: PreparedRows, control: RunControl = {}): RadiusRange {
+export function defaultRange(prepared: PreparedRows, options: RangeOptions = {}): RadiusRange {
+  const { current, ...control } = options;
   const { table, metric, index } = prepared;
   const m = table.rows;
-  let far = 0;
-  for (let i = 1; i < m; ++i) far = Math.max(far, metric.distance(table.values, table.columns, 0, i));
-  if (!(far > 0)) throw new Error(`a sweep needs at least two distinct rows, got ${m} row${m === 1 ? "" : "s"} without two apart`);
+  const far = farthestFromFirst(table, metric);
   // a true metric grows each net through the coarser ones kept so far (first-hit searches, no
   // balls); otherwise each capped net finds the balls of its landmarks through the row index
   const tree = metric.isTrueMetric ? createNetTree(table, metric) : null;
   const order = Uint32Array.from({ length: m }, (_, i) => i);
   const count = (radius: number, cap: number, keep = false): number => {
     checkStop(control, "the sweep");
-    if (!tree) return cappedGreedyCount(index, radius, cap, control);
+    const stop = (): void => checkStop(control, "the sweep");
+    if (!tree) return greedyBalls(index, radius, order, { balls: false, firstHit: false, maxLandmarks: cap, onProgress: stop }).landmarks.length;
     const level = treeNet(tree, radius, order, control, cap);
     if (level < 0) return cap + 1;
     const nodes = tree.levels[level]!.rows.length;
@@ -64,26 +78,20 @@ export function defaultRange(prepared: PreparedRows, control: RunControl = {}): 
   const bracket = (cap: number): number => {
     const over = probes.findIndex((p) => p.nodes > cap);
     if (over <= 0) throw new Error(`no radius range: the rows hold too few distinct points (${last.nodes})`);
-    let lo = probes[over]!.radius;
-    let hi = probes[over - 1]!.radius;
-    for (let s = 0; s < bisectionSteps; ++s) {
-      const mid = Math.sqrt(lo * hi);
-      if (count(mid, cap) <= cap) hi = mid;
-      else lo = mid;
-    }
+    const { hi } = logBisect(probes[over]!.radius, probes[over - 1]!.radius, bisectionSteps, (mid) => count(mid, cap) <= cap);
     // greedy net sizes are not monotone in r: keep the rounded end only if it still meets the cap
     const rounded = roundUpSignificant(hi, 3);
     return count(rounded, cap) <= cap ? rounded : hi;
   };
-  const max = bracket(rangeFewestNodes);
+  let max = bracket(rangeFewestNodes);
   control.onProgress?.(0.6);
-  const min = bracket(budget);
-  control.onProgress?.(1);
+  let min = bracket(budget);
   if (!(min < max)) throw new Error(`no radius range: the rows hold too few distinct points (${last.nodes})`);
+  // show where the user stands, unless the graph there has more nodes than the range allows
+  if (current !== undefined && Number.isFinite(current) && current > 0 && (current < min || current > max) && count(current, budget) <= budget) {
+    if (current < min) min = current;
+    else max = current;
+  }
+  control.onProgress?.(1);
   return { min, max, mostNodes: budget };
-}
-
-function roundUpSignificant(x: number, digits: number): number {
-  const scale = 10 ** (digits - 1 - Math.floor(Math.log10(x)));
-  return Math.ceil(x * scale) / scale;
 }

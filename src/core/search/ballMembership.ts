@@ -1,3 +1,4 @@
+import { checkStop, type RunControl } from "../control.ts";
 import type { CompressedLists } from "../lists/compressedLists.ts";
 import { appendList, createListBuilder, finishLists } from "../lists/listBuilder.ts";
 import type { Metric } from "../metric/types.ts";
@@ -5,6 +6,12 @@ import type { NumericTable } from "../table/types.ts";
 import { ballRows } from "./ballRows.ts";
 import { blockMembership } from "./blockMembership.ts";
 import { maybeRowIndex, type RowIndex } from "./rowIndex.ts";
+
+/** Progress is the share of landmarks done, reported every 64 landmarks. */
+export interface BallMembershipOptions extends RunControl {
+  /** A candidate index built for this table and metric (createRowIndex), reused across calls. */
+  readonly index?: RowIndex;
+}
 
 /**
  * Closed balls around landmarks: row i is a member of node k iff d(landmark_k, i) ≤ r
@@ -18,16 +25,19 @@ export function ballMembership(
   metric: Metric,
   radius: number,
   landmarks: Uint32Array,
-  onProgress?: (done: number, total: number) => void,
-  options: { index?: RowIndex } = {},
+  options: BallMembershipOptions = {},
 ): CompressedLists {
+  const { onProgress } = options;
   const builder = createListBuilder(table.rows);
   if (landmarks.length === 0) return finishLists(builder);
   const index = maybeRowIndex(table, metric, options.index);
-  if (index.tree) return blockMembership(index, radius, landmarks, onProgress);
+  if (index.tree) return blockMembership(index, radius, landmarks, options);
   for (let k = 0; k < landmarks.length; ++k) {
     appendList(builder, ballRows(index, landmarks[k]!, radius));
-    if (onProgress && (k & 63) === 63) onProgress(k + 1, landmarks.length);
+    if ((k & 63) === 63) {
+      checkStop(options, "the balls");
+      onProgress?.((k + 1) / landmarks.length);
+    }
   }
   return finishLists(builder);
 }

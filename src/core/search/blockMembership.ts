@@ -1,3 +1,4 @@
+import { checkStop, type RunControl } from "../control.ts";
 import type { CompressedLists } from "../lists/compressedLists.ts";
 import type { KdTree } from "./kdTree.ts";
 import { boxBound } from "./boxBound.ts";
@@ -36,14 +37,14 @@ interface Pass {
  * Reports progress after every 64 landmarks. Cost: O(n·L·d) at worst, O(m log m) for sorting.
  * @example blockMembership(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 2)) // => offsets [0, 2, 5], items [0, 1, 1, 2, 3]
  */
-export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): CompressedLists {
+export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl = {}): CompressedLists {
   const builder = createListBuilder(index.table.rows);
-  blockMembershipInto(builder, index, radius, landmarks, onProgress);
+  blockMembershipInto(builder, index, radius, landmarks, control);
   return finishLists(builder);
 }
 
 /** blockMembership's lists appended to `builder`, one per landmark in order (no final copy). */
-export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): void {
+export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl = {}): void {
   const { table, space, tree } = index;
   if (!space || !tree) throw new Error("blockMembership needs a search space");
   const d = table.columns;
@@ -77,7 +78,10 @@ export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radiu
     if (index.mode === "probe") index.mode = pass.scanned > 0.75 * group * table.rows ? "flat" : "tree";
     pass.bounded = index.mode !== "flat";
     appendGroup(builder, pass.pairs, pass.size, group);
-    if (onProgress && group === chunk) onProgress(first + chunk, landmarks.length);
+    if (group === chunk) {
+      checkStop(control, "the balls");
+      control.onProgress?.((first + chunk) / landmarks.length);
+    }
   }
 }
 

@@ -31,9 +31,9 @@ describe("ballMembership", () => {
 
   it("reports progress after every 64 landmarks", () => {
     const table: NumericTable = { rows: 130, columns: 1, names: ["x"], values: Float64Array.from({ length: 130 }, (_, i) => i) };
-    const reports: [number, number][] = [];
-    ballMembership(table, euclidean, 0.5, Uint32Array.from({ length: 130 }, (_, i) => i), (done, total) => reports.push([done, total]));
-    expect(reports).toEqual([[64, 130], [128, 130]]); // worked by hand: after k = 63 and k = 127
+    const reports: number[] = [];
+    ballMembership(table, euclidean, 0.5, Uint32Array.from({ length: 130 }, (_, i) => i), { onProgress: (fraction) => reports.push(fraction) });
+    expect(reports).toEqual([64 / 130, 128 / 130]); // worked by hand: after k = 63 and k = 127
   });
 
   it("each ball holds exactly the rows within r of its landmark, ascending (both landmark rules)", () => {

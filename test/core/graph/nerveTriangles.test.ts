@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, chooseLandmarks, metrics, nerveTriangles, rowsToNodes, type CompressedLists, type Metric } from "../../../src/core/index.ts";
+import { createRowIndex, landmarkBalls, ballMembership, metrics, nerveTriangles, rowsToNodes, type CompressedLists, type Metric } from "../../../src/core/index.ts";
 import { allLists } from "../support/bruteForce.ts";
 import { definedRows, radiusFor } from "../support/definedTable.ts";
 import { gridTable } from "../support/gridTable.ts";
@@ -34,7 +34,7 @@ describe("nerveTriangles", () => {
       );
     fc.assert(
       fc.property(cases, ({ metric, table, radius, rule, seed }) => {
-        const landmarks = chooseLandmarks(table, metric, radius, rule, seed);
+        const landmarks = landmarkBalls(createRowIndex(table, metric), radius, rule, seed).landmarks;
         const members = ballMembership(table, metric, radius, landmarks);
         const balls = allLists(members).map((ball) => new Set(ball));
         const expected: number[][] = [];

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { chebyshev, chooseLandmarks, euclidean, manhattan, maximinNet, randomSource, type NumericTable } from "../../../src/core/index.ts";
+import { createRowIndex, landmarkBalls, chebyshev, euclidean, manhattan, maximinNet, randomSource, type NumericTable } from "../../../src/core/index.ts";
 
 const line = (...xs: number[]): NumericTable => Object.freeze({ rows: xs.length, columns: 1, names: ["x"], values: Float64Array.from(xs) });
 
@@ -31,7 +31,7 @@ describe("maximinNet by hand", () => {
 
   it("an empty table gives no landmarks, and a start outside the rows throws", () => {
     expect(maximinNet(line(), euclidean, 1, 0).length).toBe(0); // worked by hand
-    expect(chooseLandmarks(line(), euclidean, 1, "maximin", 3).length).toBe(0); // worked by hand
+    expect(landmarkBalls(createRowIndex(line(), euclidean), 1, "maximin", 3).landmarks.length).toBe(0); // worked by hand
     expect(() => maximinNet(line(0, 1), euclidean, 1, 2)).toThrow("invalid start row: 2");
     expect(() => maximinNet(line(0, 1), euclidean, 1, -1)).toThrow("invalid start row: -1");
   });
@@ -40,8 +40,8 @@ describe("maximinNet by hand", () => {
     for (const radius of [0, -1, NaN, Infinity]) expect(() => maximinNet(line(0, 1), euclidean, radius, 0)).toThrow(`invalid radius: ${radius}`);
   });
 
-  it("chooseLandmarks with maximin and seed 1 on 10 rows starts at floor(10 · 0.09156953264027834) = 0", () => {
+  it("landmarkBalls with maximin and seed 1 on 10 rows starts at floor(10 · 0.09156953264027834) = 0", () => {
     expect(randomSource(1)()).toBe(0.09156953264027834); // pinned in test/core/random.test.ts
-    expect(chooseLandmarks(line(0, 1, 2, 3, 4, 5, 6, 7, 8, 9), euclidean, 2, "maximin", 1)[0]).toBe(0); // worked by hand
+    expect(landmarkBalls(createRowIndex(line(0, 1, 2, 3, 4, 5, 6, 7, 8, 9), euclidean), 2, "maximin", 1).landmarks[0]).toBe(0); // worked by hand
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { assertClose } from "../../assertClose.ts";
 import { ascendingRadii, logSpacedRadii } from "../../../src/core/sweep/logSpacedRadii.ts";
 import { plateaus } from "../../../src/core/radius/plateaus.ts";
-import { suggestStart } from "../../../src/core/radius/plateauMiddle.ts";
+import { plateauMiddle } from "../../../src/core/radius/plateauMiddle.ts";
 
 describe("plateaus of unchanged b0 and b1", () => {
   it("radii 1, 2, 4, 8 with b0 1, 1, 1, 2 give runs 0..2 (width 2.5 ln 2) and 3..3 (width 0.5 ln 2)", () => {
@@ -28,16 +28,16 @@ describe("suggested starting radius", () => {
 
   it("is 2 for radii 1, 2, 4, 8 when the last radius has 4 nodes: the widest eligible run is 0..2 and 2 is nearest its middle", () => {
     // run 0..2 spans ln 1 .. ln √32, middle 1.25 ln 2; ln 2 is 0.25 ln 2 away, ln 4 0.75 ln 2 (worked by hand)
-    expect(suggestStart([1, 2, 4, 8], figures)).toMatchObject({ radius: 2, index: 1, plateau: { first: 0, last: 2 } });
+    expect(plateauMiddle([1, 2, 4, 8], figures)).toMatchObject({ radius: 2, index: 1, plateau: { first: 0, last: 2 } });
   });
 
   it("leaves out radii with fewer than 5 nodes or a node holding more than half the rows, and is null when none is left", () => {
-    expect(suggestStart([1, 2], { nodes: [4, 3], largestNodeShare: [0.2, 0.2], b0: [1, 1], b1: [0, 0] })).toBeNull(); // fewer than 5 nodes
-    expect(suggestStart([1, 2], { nodes: [9, 6], largestNodeShare: [0.51, 0.6], b0: [1, 1], b1: [0, 0] })).toBeNull(); // a node holds more than half
+    expect(plateauMiddle([1, 2], { nodes: [4, 3], largestNodeShare: [0.2, 0.2], b0: [1, 1], b1: [0, 0] })).toBeNull(); // fewer than 5 nodes
+    expect(plateauMiddle([1, 2], { nodes: [9, 6], largestNodeShare: [0.51, 0.6], b0: [1, 1], b1: [0, 0] })).toBeNull(); // a node holds more than half
   });
 
   it("of two equally wide runs takes the one at smaller radii", () => {
-    const s = suggestStart([1, 2, 4, 8], { nodes: [50, 40, 30, 20], largestNodeShare: [0.1, 0.1, 0.1, 0.1], b0: [2, 2, 1, 1], b1: [0, 0, 0, 0] });
+    const s = plateauMiddle([1, 2, 4, 8], { nodes: [50, 40, 30, 20], largestNodeShare: [0.1, 0.1, 0.1, 0.1], b0: [2, 2, 1, 1], b1: [0, 0, 0, 0] });
     expect(s?.plateau.first).toBe(0); // both runs are 1.5 ln 2 wide (worked by hand); ties to the lower one
   });
 });
