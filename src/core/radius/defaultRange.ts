@@ -24,7 +24,7 @@ export const defaultRangeRule =
   "The smallest radius is the smallest one tried at which the graph has at most min(2000, max(6, m/5)) nodes, m being the number of rows used " +
   "(fewer when the rows hold fewer distinct points). For this rule the graph's landmarks are picked in file order. " +
   "Both ends are found by halving the radius from the largest distance to the first row and then narrowing down, and are rounded up to 3 significant digits. " +
-  "The range is widened to include the current radius, unless the graph there would have more nodes than the smallest radius allows.";
+  "The range is widened to include the current radius, unless the graph there would have more than 2000 nodes.";
 
 export interface RangeOptions extends RunControl {
   /** The radius of the graph on screen: the range is widened to contain it unless it would pass the node budget there. */
@@ -37,8 +37,8 @@ export interface RangeOptions extends RunControl {
  * under a true metric the halving nets are kept as the levels of a net tree
  * (landmark/netTree.ts) through which later nets are grown (treeNet, the same net). Each end is
  * bracketed by halving and narrowed by log-bisection (logBisect.ts). A current radius outside
- * the range moves the nearer end to it when its net stays within the range's node budget
- * (at most `mostNodes` landmarks); otherwise the range is left as it is.
+ * the range moves the nearer end to it when its net stays within the range's node cap
+ * (at most 2,000 landmarks, `rangeMostNodes`); otherwise the range is left as it is.
  * Throws when fewer than two distinct rows (farthestFromFirst.ts) or too few distinct points for a range exist.
  * Cost: O(log(d_far / r_min) + 16) capped nets.
  * @example defaultRange(prepareRows(demo pump fleet, its 10 numeric features, zscore, euclidean)) // => { min: 0.206, max: 5.48, mostNodes: 469 }
@@ -88,7 +88,7 @@ export function defaultRange(prepared: PreparedRows, options: RangeOptions = {})
   let min = bracket(budget);
   if (!(min < max)) throw new Error(`no radius range: the rows hold too few distinct points (${last.nodes})`);
   // show where the user stands, unless the graph there has more nodes than the range allows
-  if (current !== undefined && Number.isFinite(current) && current > 0 && (current < min || current > max) && count(current, budget) <= budget) {
+  if (current !== undefined && Number.isFinite(current) && current > 0 && (current < min || current > max) && count(current, rangeMostNodes) <= rangeMostNodes) {
     if (current < min) min = current;
     else max = current;
   }

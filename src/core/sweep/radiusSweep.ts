@@ -21,7 +21,7 @@ export interface SweepOptions extends RunControl {
   readonly radiusMax?: number;
   /** Number of log-spaced radii, at least 2 (default 24). */
   readonly steps?: number;
-  /** The radius on screen: the default range is widened to contain it unless the graph there passes the range's node budget. */
+  /** The radius on screen: the default range is widened to contain it unless the graph there passes the range's node cap of 2,000. */
   readonly current?: number;
   /** Receives each radius's whole cover (index into the ascending radii) and its balls in prepared-table rows. */
   readonly onCover?: (index: number, cover: SweepCover, balls: Balls) => void;

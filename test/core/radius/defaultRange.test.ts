@@ -8,7 +8,7 @@ import { buildCover, parseCsvText } from "../../../src/core/index.ts";
 import { defaultRange } from "../../../src/core/radius/defaultRange.ts";
 import { prepareRows } from "../../../src/core/search/prepareRows.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
-import { pointsTable } from "./support.ts";
+import { pointsTable } from "../sweep/support.ts";
 
 const demo = parseCsvText(readFileSync(new URL("../../../public/demo/pump-fleet.csv", import.meta.url), "utf8"));
 const demoFeatures = ["age_years", "flow_m3h", "head_m", "power_kw", "efficiency_pct", "vibration_mm_s", "bearing_temp_c", "starts_per_day", "runtime_h_per_day", "suction_pressure_kpa"];
@@ -51,10 +51,26 @@ describe("default radius range", () => {
     for (const r of [min, max]) expect(Number(r.toPrecision(3))).toBe(r);
   });
 
-  it("refuses rows that are all the same, and one row", () => {
+  it("refuses rows that are all the same, and one row, with the default radius's message (fewer than two distinct rows)", () => {
     const params = { features: ["x"], scale: "none", metric: "euclidean", landmarks: "greedy-file-order", seed: 1 } as const;
-    expect(() => radiusSweep(pointsTable(["x"], [[2], [2], [2]]), params)).toThrow("a sweep needs at least two distinct rows, got 3 rows without two apart");
-    expect(() => radiusSweep(pointsTable(["x"], [[2]]), params)).toThrow("a sweep needs at least two distinct rows, got 1 row without two apart");
+    expect(() => radiusSweep(pointsTable(["x"], [[2], [2], [2]]), params)).toThrow("no radius separates these rows: fewer than two distinct rows (3 rows used)");
+    expect(() => radiusSweep(pointsTable(["x"], [[2]]), params)).toThrow("no radius separates these rows: fewer than two distinct rows (1 row used)");
+  });
+
+  it("a current radius of 0.1 below the demo's range 0.206 … 5.48 moves the lower end to 0.1 (1950 landmarks there, within the cap of 2000)", () => {
+    const prepared = prepareRows(demo, demoParams);
+    expect(defaultRange(prepared, { current: 0.1 })).toEqual({ min: 0.1, max: 5.48, mostNodes: 469 }); // computed by this code at commit time: greedy net at 0.1 has 1950 landmarks
+    expect(radiusSweep(demo, demoParams, { current: 0.1 }).range.min).toBe(0.1); // the sweep passes it on
+  });
+
+  it("a current radius of 0.08 whose graph has more than 2000 nodes leaves the demo's range as it is", () => {
+    expect(defaultRange(prepareRows(demo, demoParams), { current: 0.08 })).toEqual({ min: 0.206, max: 5.48, mostNodes: 469 }); // computed by this code at commit time: 2220 landmarks at 0.08
+  });
+
+  it("a current radius above the range moves the upper end to it, and one inside changes nothing", () => {
+    const prepared = prepareRows(demo, demoParams);
+    expect(defaultRange(prepared, { current: 8 })).toEqual({ min: 0.206, max: 8, mostNodes: 469 }); // worked by hand: a larger radius has at most the top's nodes here
+    expect(defaultRange(prepared, { current: 1 })).toEqual({ min: 0.206, max: 5.48, mostNodes: 469 }); // worked by hand: 1 lies inside
   });
 
   it("a sweep over the default range states the rule and spans it in 24 log-spaced radii", () => {
