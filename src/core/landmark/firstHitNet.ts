@@ -13,6 +13,8 @@ export interface FirstHitOptions extends RunControl {
 }
 
 /**
+ * Fast variant of greedyBalls (the one greedy loop), which hands over to it mid-order: the same
+ * net for the same order, held equal on tables of a few thousand rows by test/core/landmark/fastVariants.test.ts.
  * Greedy ε-net by first-hit tests: visit order[from..]; a row not in `covered` is tested against
  * the landmarks chosen here so far until one lies within r (the reference predicate decides);
  * if none does, it becomes a landmark. The landmark that last covered a row of the same block of

@@ -2,7 +2,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { appendList, createListBuilder, finishLists } from "../../../src/core/lists/listBuilder.ts";
-import { writeGroup } from "./support/listGroups.ts";
+import { writeGroup } from "../search/support/listGroups.ts";
 
 describe("listBuilder", () => {
   it("gives the offsets and items of the plain concatenation, lists longer than a chunk included", () => {

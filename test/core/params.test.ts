@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { landmarkRules, maybeLandmarkRule, maybeScale, scaleNames } from "../../../src/core/index.ts";
+import { landmarkRules, maybeLandmarkRule, maybeScale, scaleNames } from "../../src/core/index.ts";
 
 describe("cover parameters", () => {
   it("lists the landmark rules greedy-file-order and greedy-shuffled, and the scaling zscore (the default) first", () => {

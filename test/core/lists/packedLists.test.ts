@@ -6,7 +6,7 @@ import fc from "fast-check";
 import { transposeLists } from "../../../src/core/lists/compressedLists.ts";
 import { appendList, createListBuilder, finishLists, transposeBuilt } from "../../../src/core/lists/listBuilder.ts";
 import { createPackedStore, packList, packedPieces } from "../../../src/core/lists/packedLists.ts";
-import { writeGroup } from "./support/listGroups.ts";
+import { writeGroup } from "../search/support/listGroups.ts";
 
 /** Ascending lists with small gaps (one byte), large ones (up to five bytes) and values up to 2³² − 1. */
 const ascendingList = fc
