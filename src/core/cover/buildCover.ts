@@ -14,7 +14,7 @@ import { createRowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
 import type { CoverGraph } from "./coverGraph.ts";
 import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule, type MissingPolicy } from "../params.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "../params.ts";
 import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
@@ -60,7 +60,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const metric = maybeMetric(params.metric);
   maybeScale(params.scale);
   const rule = maybeLandmarkRule(params.landmarks);
-  const missing = maybeMissingPolicy(params.missing ?? "drop");
+  maybeMissingPolicy(params.missing ?? "drop");
   if (!(params.radius > 0) || !Number.isFinite(params.radius)) throw new Error(`invalid radius: ${params.radius}`);
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
 
@@ -72,7 +72,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     return elapsed;
   };
   onProgress?.("scale", 0);
-  const found = landmarksAndBalls(parsed, params, metric, missing, rule, lap, options);
+  const found = landmarksAndBalls(parsed, params, { ...options, metric, rule, lap });
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -122,6 +122,14 @@ type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
   | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer | null };
 
+/** What a build has settled before it reads the rows: the metric, the rule, its clock and its hooks. */
+interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
+  readonly metric: Metric;
+  readonly rule: LandmarkRule;
+  /** Milliseconds since the last lap. */
+  readonly lap: () => number;
+}
+
 interface FoundNet {
   /** Landmark rows (of the prepared table), in the order chosen. */
   readonly centers: Uint32Array;
@@ -140,19 +148,12 @@ interface FoundNet {
  * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net;
  * the caller times the balls, which it turns into lists by row.
  */
-function landmarksAndBalls(
-  parsed: ParsedTable,
-  params: CoverParams,
-  metric: Metric,
-  missing: MissingPolicy,
-  rule: LandmarkRule,
-  lap: () => number,
-  { onProgress, shouldStop }: BuildOptions,
-): FoundNet {
+function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): FoundNet {
+  const { metric, rule, lap, onProgress, shouldStop } = run;
   const step = (): void => {
     if (shouldStop?.()) throw new Cancelled("the build");
   };
-  const { table, ...rest } = prepareFeatures(parsed, params, metric, missing, step);
+  const { table, ...rest } = prepareFeatures(parsed, params, step);
   const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
   const n = table.rows;

@@ -33,24 +33,25 @@ export function firstHitNet(index: RowIndex, radius: number, order: ArrayLike<nu
   const limit = space ? space.threshold(radius) : Infinity;
   const norm = space ? space.norm : "squares";
   const landmarks: number[] = [];
-  let marks = new Float64Array(16 * d); // landmark coordinates, packed
+  // landmark coordinates, packed; borrowed by coveredBy for this call, grown in place
+  const hits: HitContext = { index, landmarks, marks: new Float64Array(16 * d), points, norm, limit, radius };
   // the last landmark found covering a row of each block of 32 tree positions (neighbours in space)
   const block = (i: number): number => (index.tree ? index.tree.positionOf[i]! : i) >>> 5;
   const hint = new Int32Array(Math.ceil(table.rows / 32) + 1).fill(-1);
   for (let k = from; k < order.length; ++k) {
     const i = order[k]!;
     const tried = covered?.[i] ? -1 : hint[block(i)]!;
-    const found = covered?.[i] ? 0 : tried >= 0 && index.metric.within(table.values, d, landmarks[tried]!, i, radius) ? tried : coveredBy(index, landmarks, marks, points, i, norm, limit, radius);
+    const found = covered?.[i] ? 0 : tried >= 0 && index.metric.within(table.values, d, landmarks[tried]!, i, radius) ? tried : coveredBy(hits, i);
     if (found >= 0) {
       if (!covered?.[i]) hint[block(i)] = found;
     } else {
       hint[block(i)] = landmarks.length;
-      if ((landmarks.length + 1) * d > marks.length) {
-        const grown = new Float64Array(2 * marks.length);
-        grown.set(marks);
-        marks = grown;
+      if ((landmarks.length + 1) * d > hits.marks.length) {
+        const grown = new Float64Array(2 * hits.marks.length);
+        grown.set(hits.marks);
+        hits.marks = grown;
       }
-      marks.set(points.subarray(i * d, i * d + d), landmarks.length * d);
+      hits.marks.set(points.subarray(i * d, i * d + d), landmarks.length * d);
       landmarks.push(i);
       if (landmarks.length > maxLandmarks) break;
     }
@@ -62,8 +63,20 @@ export function firstHitNet(index: RowIndex, radius: number, order: ArrayLike<nu
   return Uint32Array.from(landmarks);
 }
 
+/** What the first-hit tests of one net read: the landmarks so far, their packed coordinates, the norm and threshold. */
+interface HitContext {
+  readonly index: RowIndex;
+  readonly landmarks: number[];
+  marks: Float64Array;
+  readonly points: Float64Array;
+  readonly norm: Norm;
+  readonly limit: number;
+  readonly radius: number;
+}
+
 /** Index (into `landmarks`) of a landmark within r of row i, or −1. */
-function coveredBy(index: RowIndex, landmarks: number[], marks: Float64Array, points: Float64Array, i: number, norm: Norm, limit: number, radius: number): number {
+function coveredBy(context: HitContext, i: number): number {
+  const { index, landmarks, marks, points, norm, limit, radius } = context;
   const { metric, table } = index;
   const { values, columns: d } = table;
   const within = (landmark: number): boolean => metric.within(values, d, landmark, i, radius);

@@ -31,7 +31,7 @@ const bisectionSteps = 30; // a bracket of a factor 10⁴ ends within a factor 1
 export function defaultRadius(parsed: ParsedTable, params: RadiusBasis, control: RunControl = {}): number {
   const metric = maybeMetric(params.metric);
   const what = "the default radius";
-  const scaled = prepareFeatures(parsed, params, metric, params.missing ?? "drop", () => checkStop(control, what)).table;
+  const scaled = prepareFeatures(parsed, params, () => checkStop(control, what)).table;
   const m = scaled.rows;
   const target = Math.min(defaultRadiusMostNodes, Math.max(Math.min(defaultRadiusFewestNodes, Math.ceil(m / 5)), Math.round(1.5 * Math.sqrt(m))));
   const sample = stridedRows(scaled, defaultRadiusSampleSize);

@@ -1,10 +1,10 @@
-import type { Metric } from "../metric/types.ts";
+import { maybeMetric } from "../metric/metrics.ts";
 import { scaleTable } from "./scaleTable.ts";
 import { oneHot } from "../table/oneHot.ts";
 import { selectFeatures } from "../table/selectFeatures.ts";
 import type { NumericTable, ParsedTable, TableColumn } from "../table/types.ts";
 import { excludeUndefinedRows } from "./excludeUndefinedRows.ts";
-import type { CoverParams, MissingPolicy } from "../params.ts";
+import { maybeMissingPolicy, type CoverParams } from "../params.ts";
 
 export interface PreparedFeatures {
   /** Row-major: the scaled and weighted numeric features, then the one-hot indicators. */
@@ -17,6 +17,9 @@ export interface PreparedFeatures {
   readonly constantColumns: readonly string[];
 }
 
+/** The parameters the rows depend on: features, scaling, weights, one-hot columns, the missing-value policy (default "drop") and the metric. */
+export type PreparedParams = Pick<CoverParams, "features" | "scale" | "metric"> & Partial<Pick<CoverParams, "weights" | "oneHot" | "missing">>;
+
 /**
  * The radius-free start of every build, shared by buildCover and the sweep: select the numeric
  * features under the missing-value policy, scale them and apply their weights; then append one
@@ -26,13 +29,9 @@ export interface PreparedFeatures {
  * which the metric is undefined. `onStep` is called now and then (a chance to cancel by
  * throwing). O(n · (d + levels)) plus the scaling.
  */
-export function prepareFeatures(
-  parsed: ParsedTable,
-  params: Pick<CoverParams, "features" | "scale" | "weights" | "oneHot">,
-  metric: Metric,
-  missing: MissingPolicy,
-  onStep?: () => void,
-): PreparedFeatures {
+export function prepareFeatures(parsed: ParsedTable, params: PreparedParams, onStep?: () => void): PreparedFeatures {
+  const metric = maybeMetric(params.metric);
+  const missing = maybeMissingPolicy(params.missing ?? "drop");
   const encoded = (params.oneHot ?? []).map((name) => categoricalColumn(parsed, name));
   if (params.features.length === 0 && encoded.length === 0) throw new Error("choose at least one feature column");
   const numericWeights = Object.fromEntries(Object.entries(params.weights ?? {}).filter(([name]) => params.features.includes(name)));

@@ -27,9 +27,9 @@ export function prepareRows(parsed: ParsedTable, params: SweepParams, control: R
   const metric = maybeMetric(params.metric);
   maybeScale(params.scale);
   maybeLandmarkRule(params.landmarks);
-  const missing = maybeMissingPolicy(params.missing ?? "drop");
+  maybeMissingPolicy(params.missing ?? "drop");
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
-  const prepared = prepareFeatures(parsed, params, metric, missing, () => checkStop(control, what));
+  const prepared = prepareFeatures(parsed, params, () => checkStop(control, what));
   checkStop(control, what);
   return { metric, ...prepared, index: createRowIndex(prepared.table, metric, { onStep: () => checkStop(control, what) }) };
 }

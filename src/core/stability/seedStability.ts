@@ -73,7 +73,7 @@ export function seedStability(parsed: ParsedTable, params: CoverParams, options:
   for (let s = 0; s < count; ++s) {
     checkStop(options, "the seed stability run");
     const part: RunControl = { ...(options.shouldStop ? { shouldStop: options.shouldStop } : {}), onProgress: (f) => options.onProgress?.((0.8 * (s + f)) / count) };
-    const balls = netWithBalls(prepared.index, params.radius, "greedy-shuffled", seeds[s]!, part);
+    const balls = netWithBalls(prepared.index, params.radius, "greedy-shuffled", seeds[s]!, { ...part, what: "the seed stability run" });
     const cover = coverFromBalls(prepared, params.radius, balls, part);
     builds.push(balls);
     figures.nodes[s] = balls.landmarks.length;

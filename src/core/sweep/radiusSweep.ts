@@ -90,17 +90,15 @@ export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: 
   }
   const rangeTime = now() - started;
   const figures = emptyFigures(radii);
-  sweepCovers(
-    prepared,
-    radii,
-    params.landmarks,
-    params.seed,
-    (k, cover, balls) => {
+  sweepCovers(prepared, radii, {
+    ...part(rangeShare, 1 - rangeShare),
+    rule: params.landmarks,
+    seed: params.seed,
+    visit: (k, cover, balls) => {
       setFigures(figures, k, coverFigures(cover, balls.rowNodes));
       onCover?.(k, cover, balls);
     },
-    part(rangeShare, 1 - rangeShare),
-  );
+  });
   return {
     params: { ...params, features: [...params.features] },
     rowsRead,

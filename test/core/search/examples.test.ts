@@ -12,7 +12,7 @@ const line = (n: number): NumericTable => Object.freeze({ rows: n, columns: 1, n
 
 describe("search JSDoc examples", () => {
   it("scanLeaf: centre 1 against positions holding 0 and 3 with limit 1 keeps position 0 only (1² ≤ 1 < 2²)", () => {
-    expect(scanLeaf("squares", Float64Array.of(0, 3), 1, Float64Array.of(1), 0, 0, 2, 1, new Uint32Array(2), 0)).toBe(1); // worked by hand
+    expect(scanLeaf({ norm: "squares", dims: 1, coords: Float64Array.of(0, 3), lo: new Float64Array(0), hi: new Float64Array(0), centre: Float64Array.of(1), centreBase: 0, limit: 1 }, 0, 2, new Uint32Array(2), 0)).toBe(1); // worked by hand
   });
 
   it("greedyBalls and firstHitNet: 0, 1, 2, 3 with r = 1 in file order give landmarks 0 and 2 (1 ties with 0, 3 with 2)", () => {
