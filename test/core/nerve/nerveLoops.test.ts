@@ -5,6 +5,7 @@ import fc from "fast-check";
 import { components, nerveBetti, nerveTriangles, overlapEdges, type CompressedLists } from "../../../src/core/index.ts";
 import { forEachFanTriangle } from "../../../src/core/nerve/fanTriangles.ts";
 import { nerveLoops } from "../../../src/core/nerve/nerveLoops.ts";
+import { gf2Rank } from "../support/gf2Betti.ts";
 import { peeledRank } from "../../../src/core/nerve/peeledRank.ts";
 
 /** Row → nodes lists (each row's nodes sorted, duplicates dropped) from plain arrays. */
@@ -22,23 +23,8 @@ function both(rows: readonly (readonly number[])[], nodes: number) {
   return { fast: nerveLoops(rowNodes, nodes, edges, count), full: { b0: full.b0, b1: full.b1 } };
 }
 
-/** Rank over GF(2) by Gaussian elimination on bit sets (rows as bits of a bigint), independent of peeledRank. */
-function gaussRank(columns: readonly (readonly number[])[]): number {
-  const pivots = new Map<number, bigint>();
-  for (const column of columns) {
-    let bits = column.reduce((acc, row) => acc ^ (1n << BigInt(row)), 0n);
-    while (bits !== 0n) {
-      const top = bits.toString(2).length - 1;
-      const other = pivots.get(top);
-      if (other === undefined) {
-        pivots.set(top, bits);
-        break;
-      }
-      bits ^= other;
-    }
-  }
-  return pivots.size;
-}
+/** Rank over GF(2) of the matrix whose columns list their 1-rows: gf2Rank, the tests' one GF(2) rank (independent of peeledRank). */
+const gaussRank = (columns: readonly (readonly number[])[]): number => gf2Rank(Math.max(0, ...columns.flat().map((row) => row + 1)), columns.length, columns);
 
 describe("nerveLoops", () => {
   it("three balls overlapping in pairs with no common row: b0 = 1, b1 = 1 (a hollow triangle)", () => {

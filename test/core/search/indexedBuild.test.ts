@@ -14,7 +14,7 @@ import {
   type ParsedTable,
   type ScaleName,
 } from "../../../src/core/index.ts";
-import { plainBall, plainEdges, plainGreedy, plainMaximin } from "./support/plainSearch.ts";
+import { bruteCover } from "../support/bruteCover.ts";
 import { tableArbitrary } from "./support/searchTables.ts";
 
 /** 8 clusters of 375 rows in 6 columns: centres uniform in [−10, 10], offsets uniform in [−1, 1]. Seeded. */
@@ -36,22 +36,28 @@ const toParsed = (values: Float64Array, rows: number, columns: number): ParsedTa
   })),
 });
 
-/** The build by the plain loops on the same scaled table: net, balls (as parsed rows) and edges. */
+/** The build by the reference cover builder (bruteCover) with the metric's predicate, on the same scaled table: net, balls (as parsed rows) and edges. */
 function plainBuild(parsed: ParsedTable, params: CoverParams) {
   const metric = maybeMetric(params.metric);
   const selection = selectFeatures(parsed, params.features, "drop");
   const defined = excludeUndefinedRows(scaleTable(selection.table, params.scale).table, metric, selection.usedRows);
-  const table = defined.table;
-  const n = table.rows;
-  const landmarks =
-    params.landmarks === "maximin"
-      ? n === 0
-        ? []
-        : plainMaximin(table, metric, params.radius, Math.floor(randomSource(params.seed)() * n))
-      : plainGreedy(table, metric, params.radius, params.landmarks === "greedy-shuffled" ? shuffledOrder(n, randomSource(params.seed)) : Uint32Array.from({ length: n }, (_, i) => i));
-  const balls = landmarks.map((l) => plainBall(table, metric, l, params.radius));
+  const { values, columns: d, rows: n } = defined.table;
+  if (n === 0) return { landmarks: [], balls: [], edges: { source: [], target: [], shared: [] } };
+  const cover = bruteCover(
+    Array.from({ length: n }, (_, i) => Array.from(values.subarray(i * d, i * d + d))),
+    {
+      metric: params.metric,
+      radius: params.radius,
+      landmarks: params.landmarks,
+      order: Array.from(params.landmarks === "greedy-shuffled" ? shuffledOrder(n, randomSource(params.seed)) : Uint32Array.from({ length: n }, (_, i) => i)),
+      start: Math.floor(randomSource(params.seed)() * n),
+      within: (a, b) => metric.within(values, d, a, b, params.radius),
+      distance: (a, b) => metric.distance(values, d, a, b),
+      loops: false,
+    },
+  );
   const parsedRow = (i: number): number => defined.usedRows[i]!;
-  return { landmarks: landmarks.map(parsedRow), balls: balls.map((ball) => ball.map(parsedRow)), edges: plainEdges(balls) };
+  return { landmarks: cover.landmarks.map(parsedRow), balls: cover.balls.map((ball) => ball.map(parsedRow)), edges: cover.edges };
 }
 
 const built = (result: CoverResult) => ({
