@@ -32,10 +32,12 @@ export interface NetWithBalls {
 }
 
 /**
- * Greedy ε-net and its balls in one pass: visit rows in `order`; a row not yet covered becomes
- * a landmark, and its closed ball (ballRows: reference predicate) marks every row within r as
- * covered. Row i is chosen iff no earlier landmark l has within(l, i): exactly the greedy net
- * of greedyNet.ts, since "covered" is that disjunction, whatever order the balls are found in.
+ * Greedy ε-net and its balls in one pass, the one greedy loop of core (the build, the sweep,
+ * the seed runs, the default radius and the default range all run it; `order` comes from
+ * visitOrder.ts): visit rows in `order`; a row not yet covered becomes a landmark, and its
+ * closed ball (ballRows: reference predicate) marks every row within r as covered. Row i is
+ * chosen iff no earlier landmark l has within(l, i), the greedy net's rule, since "covered" is
+ * that disjunction, whatever order the balls are found in.
  * The balls are the ones ballMembership would list, so the net costs nothing beyond them.
  * When the first queries scan more than n/16 rows each (the index prunes little: high dimension,
  * or no index), the rest of the order is finished by firstHitNet, which only tests rows against
