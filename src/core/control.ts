@@ -24,6 +24,21 @@ export interface RunControl {
   readonly shouldStop?: () => boolean;
 }
 
+/**
+ * A run made of named phases (the build): `onPhase` announces each phase as it starts, and the
+ * fractions `onProgress` reports after it are of that phase, from 0 to 1.
+ */
+export interface PhasedControl<Phase extends string> extends RunControl {
+  readonly onPhase?: (phase: Phase) => void;
+}
+
+/**
+ * The cancel-only hook of loops that report no progress (reading, scaling, building the tree):
+ * called now and then, it throws core's Cancelled error to stop. A RunControl gives one as
+ * `() => checkStop(control, what)`.
+ */
+export type StepHook = () => void;
+
 /** Throws core's Cancelled error ("<what> was cancelled") when the control says stop. */
 export function checkStop(control: RunControl, what: string): void {
   if (control.shouldStop?.()) throw new Cancelled(what);

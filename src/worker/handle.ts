@@ -77,8 +77,11 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           return { id: request.id, type: "adopted" };
         case "suggestRadius":
           return { id: request.id, type: "radius", radius: defaultRadius(loaded(), request.params, { onProgress: (fraction) => progress("suggest", fraction), shouldStop: () => isStopped(request) }) };
-        case "build":
-          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress: progress, shouldStop: () => isStopped(request), now }) };
+        case "build": {
+          let phase: Progress["phase"] = "scale";
+          const onPhase = (next: Progress["phase"]): void => void (phase = next);
+          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onPhase, onProgress: (fraction) => progress(phase, fraction), shouldStop: () => isStopped(request), now }) };
+        }
         case "sweep": {
           const { radiusMin, radiusMax, steps, current } = request.range;
           const options = {

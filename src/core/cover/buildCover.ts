@@ -4,7 +4,7 @@ import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/li
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
 import { overlapEdges } from "../nerve/overlapEdges.ts";
-import { Cancelled, type RunControl } from "../control.ts";
+import { Cancelled, type PhasedControl, type RunControl } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { greedyBalls } from "../landmark/greedyBalls.ts";
@@ -29,11 +29,13 @@ export interface CoverResult extends Omit<PreparedFeatures, "table">, CoverGraph
   readonly timings: Readonly<Record<BuildPhase, number>>;
 }
 
-export interface BuildOptions {
-  /** Progress by phase; a throw from it (core's Cancelled) stops the build. */
-  onProgress?: (phase: BuildPhase, fraction: number) => void;
-  /** Asked inside long steps that report no progress (selecting, scaling, the tree); true stops the build with Cancelled. */
-  shouldStop?: () => boolean;
+/**
+ * onPhase announces each phase, onProgress reports the fraction of the current phase (a throw
+ * from either, core's Cancelled, stops the build); shouldStop is asked inside long steps,
+ * including those that report no progress (selecting, scaling, the tree), and true stops the
+ * build with Cancelled.
+ */
+export interface BuildOptions extends PhasedControl<BuildPhase> {
   now?: () => number;
   /** Compute triangles and b1 (default true). */
   loops?: boolean;
@@ -57,6 +59,10 @@ export interface BuildOptions {
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
   const { onProgress, now = Date.now, loops = true } = options;
+  const enter = (phase: BuildPhase): void => {
+    options.onPhase?.(phase);
+    onProgress?.(0);
+  };
   const metric = maybeMetric(params.metric);
   maybeScale(params.scale);
   const rule = maybeLandmarkRule(params.landmarks);
@@ -71,8 +77,8 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     t = t1;
     return elapsed;
   };
-  onProgress?.("scale", 0);
-  const found = landmarksAndBalls(parsed, params, { ...options, metric, rule, lap });
+  enter("scale");
+  const found = landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap });
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -82,16 +88,16 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const local = rowLists ?? rowsToNodes(rowNodes, centers.length);
   const memberTime = lap();
 
-  onProgress?.("edges", 0);
+  enter("edges");
   const edges = overlapEdges(rowNodes, centers.length, local);
   const edgeTime = lap();
 
   const { component, count } = components(centers.length, edges.source, edges.target);
   const componentTime = lap();
 
-  onProgress?.("loops", 0);
+  enter("loops");
   // b1 by the spanning-forest route (same value as nerveBetti's full reduction, without listing every triangle)
-  const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, { onProgress: (f) => onProgress?.("loops", f) }) : null;
+  const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, onProgress ? { onProgress } : {}) : null;
   const loopTime = lap();
 
   const toParsedRow = (i: number): number => prepared.usedRows[i]!;
@@ -124,6 +130,8 @@ type FoundBalls =
 
 /** What a build has settled before it reads the rows: the metric, the rule, its clock and its hooks. */
 interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
+  /** Announces a phase and reports its start. */
+  readonly enter: (phase: BuildPhase) => void;
   readonly metric: Metric;
   readonly rule: LandmarkRule;
   /** Milliseconds since the last lap. */
@@ -149,7 +157,7 @@ interface FoundNet {
  * the caller times the balls, which it turns into lists by row.
  */
 function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): FoundNet {
-  const { metric, rule, lap, onProgress, shouldStop } = run;
+  const { metric, rule, lap, enter, onProgress, shouldStop } = run;
   const step = (): void => {
     if (shouldStop?.()) throw new Cancelled("the build");
   };
@@ -157,25 +165,25 @@ function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildR
   const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
   const n = table.rows;
-  const phase = (name: BuildPhase): RunControl => ({ ...(shouldStop ? { shouldStop } : {}), onProgress: (fraction) => onProgress?.(name, fraction) });
-  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
+  const control: RunControl = { ...(shouldStop ? { shouldStop } : {}), ...(onProgress ? { onProgress } : {}) };
+  const membersProgress = (done: number, total: number): void => onProgress?.(done / total);
 
-  onProgress?.("landmarks", 0);
+  enter("landmarks");
   const indexOptions = { onStep: step }; // a chance to cancel while the tree is built
   const ordered = rule === "maximin" ? null : treeOrderIndex(table, metric, indexOptions); // `table` is rearranged from here on
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;
     // visit the rows in the rule's order (visitOrder), at their tree positions
     let lists = createListBuilder(n, { packed: true });
-    const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...phase("landmarks"), into: lists });
+    const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...control, into: lists });
     const landmarkTime = lap();
-    onProgress?.("members", 0);
+    enter("members");
     if (lists.offsets.length - 1 === net.landmarks.length) {
       // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
       lists = createListBuilder(n, { packed: true });
-      blockMembershipInto(lists, index, params.radius, net.landmarks, phase("members"));
+      blockMembershipInto(lists, index, params.radius, net.landmarks, control);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
     // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
@@ -186,10 +194,10 @@ function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildR
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
   // the net's share of progress goes to "landmarks"; balls it did not keep are found inside
-  const net = landmarkBalls(index, params.radius, rule, params.seed, { ...phase("landmarks"), firstHit: true, what: "the build" });
+  const net = landmarkBalls(index, params.radius, rule, params.seed, { ...control, firstHit: true, what: "the build" });
   const centers = net.landmarks;
   const landmarkTime = lap();
-  onProgress?.("members", 0);
+  enter("members");
   for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
   return { centers, balls: { kind: "rows", lists: net.members }, prepared, scaleTime, landmarkTime };
 }

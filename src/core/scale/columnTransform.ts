@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import type { NumericTable } from "../table/types.ts";
 
 export interface ScaledTable {
@@ -15,7 +16,7 @@ export interface ScaledTable {
  */
 export type ColumnFit = (values: Float64Array, j: number, d: number, n: number) => { center: number; spread: number };
 
-export function columnTransform(input: NumericTable, into: Float64Array | undefined, fit: ColumnFit, onStep?: () => void): ScaledTable {
+export function columnTransform(input: NumericTable, into: Float64Array | undefined, fit: ColumnFit, onStep?: StepHook): ScaledTable {
   const { rows: n, columns: d, values } = input;
   const out = into ?? new Float64Array(values.length);
   if (out.length !== values.length) throw new Error(`scaling target holds ${out.length} values, not ${values.length}`);

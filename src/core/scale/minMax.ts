@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import type { NumericTable } from "../table/types.ts";
 import { columnTransform } from "./columnTransform.ts";
 import type { ScaledTable } from "./columnTransform.ts";
@@ -8,7 +9,7 @@ import type { ScaledTable } from "./columnTransform.ts";
  * A constant column (max = min) becomes 0 and is reported. O(n·d).
  * @example minMax({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(2, 4, 6) }).table.values // => Float64Array [0, 0.5, 1]
  */
-export function minMax(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
+export function minMax(input: NumericTable, into?: Float64Array, onStep?: StepHook): ScaledTable {
   return columnTransform(input, into, (values, j, d, n) => {
     let lo = Infinity;
     let hi = -Infinity;

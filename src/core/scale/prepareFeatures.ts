@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import { scaleTable } from "./scaleTable.ts";
 import { oneHot } from "../table/oneHot.ts";
@@ -29,7 +30,7 @@ export type PreparedParams = Pick<CoverParams, "features" | "scale" | "metric"> 
  * which the metric is undefined. `onStep` is called now and then (a chance to cancel by
  * throwing). O(n · (d + levels)) plus the scaling.
  */
-export function prepareFeatures(parsed: ParsedTable, params: PreparedParams, onStep?: () => void): PreparedFeatures {
+export function prepareFeatures(parsed: ParsedTable, params: PreparedParams, onStep?: StepHook): PreparedFeatures {
   const metric = maybeMetric(params.metric);
   const missing = maybeMissingPolicy(params.missing ?? "drop");
   const encoded = (params.oneHot ?? []).map((name) => categoricalColumn(parsed, name));
