@@ -19,9 +19,10 @@ export interface PreparedRows extends PreparedFeatures {
 /**
  * The radius-free first half of buildCover, in the same order and by the same functions: select
  * the features under the missing-value policy, scale and weight, leave out rows where the metric
- * is undefined, and build the candidate index (search/rowIndex.ts) that buildCover builds per
- * call. Checks every parameter but the radius, and `control.shouldStop` while the index is
- * built. O(n log n · d).
+ * is undefined (scale/prepareFeatures.ts), and build a candidate index (search/rowIndex.ts) in
+ * file order. buildCover builds its own index per call, in tree order for greedy rules
+ * (treeOrderIndex.ts); both only prune, so every decision is the same predicate call. Checks
+ * every parameter but the radius, and `control.shouldStop` while the index is built. O(n log n · d).
  */
 export function prepareRows(parsed: ParsedTable, params: SweepParams, control: RunControl = {}, what = "the sweep"): PreparedRows {
   const metric = maybeMetric(params.metric);
