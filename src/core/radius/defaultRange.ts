@@ -24,7 +24,7 @@ export const defaultRangeRule =
   "The smallest radius is the smallest one tried at which the graph has at most min(2000, max(6, m/5)) nodes, m being the number of rows used " +
   "(fewer when the rows hold fewer distinct points). For this rule the graph's landmarks are picked in file order. " +
   "Both ends are found by halving the radius from the largest distance to the first row and then narrowing down, and are rounded up to 3 significant digits. " +
-  "The range is widened to include the current radius, unless the graph there would have more than 2000 nodes.";
+  "The range is widened to include the current radius, unless the graph there would have more than 2000 nodes"; // no final period: the readers add one
 
 export interface RangeOptions extends RunControl {
   /** The radius of the graph on screen: the range is widened to contain it unless it would pass the node budget there. */

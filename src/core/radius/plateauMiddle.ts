@@ -4,9 +4,9 @@ export const plateauFewestNodes = 5; // "at least five nodes" (issue 6)
 export const plateauLargestShare = 0.5; // "no single node holds more than half the rows" (issue 6)
 
 export const plateauMiddleRule =
-  "The plateau middle is the radius in the middle of the widest stretch of swept radii over which the number of separate pieces (b0) and of loops (b1) stay the same. " +
+  "the plateau middle is the radius in the middle of the widest stretch of swept radii over which the number of separate pieces (b0) and of loops (b1) stay the same. " +
   "Only radii where the graph has at least 5 nodes and no node holds more than half the rows count. " +
-  "Widths are compared on a log scale, and on a tie the stretch of smaller radii wins.";
+  "Widths are compared on a log scale, and on a tie the stretch of smaller radii wins"; // no final period: the readers add one
 
 export interface PlateauMiddle {
   readonly radius: number;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { euclidean, farthestFromFirst, logBisect, roundUpSignificant, type NumericTable } from "../../../src/core/index.ts";
+import { defaultRangeRule, euclidean, farthestFromFirst, logBisect, plateauMiddleRule, roundUpSignificant, type NumericTable } from "../../../src/core/index.ts";
 
 const line = (...xs: number[]): NumericTable => Object.freeze({ rows: xs.length, columns: 1, names: ["x"], values: Float64Array.from(xs) });
 
@@ -42,5 +42,16 @@ describe("farthestFromFirst", () => {
     expect(() => farthestFromFirst(line(5), euclidean)).toThrow("no radius separates these rows: fewer than two distinct rows (1 row used)");
     expect(() => farthestFromFirst(line(5, 5), euclidean)).toThrow("no radius separates these rows: fewer than two distinct rows (2 rows used)");
     expect(() => farthestFromFirst(line(), euclidean)).toThrow("no radius separates these rows: fewer than two distinct rows (0 rows used)");
+  });
+});
+
+describe("rule texts under the sweep chart", () => {
+  it("name the plateau middle and the current radius, in words without jargon (no 'greedy', 'ε', 'bisection' or 'suggest'), and end without a period", () => {
+    expect(plateauMiddleRule.startsWith("the plateau middle is the radius")).toBe(true);
+    expect(defaultRangeRule).toContain("widened to include the current radius");
+    for (const text of [plateauMiddleRule, defaultRangeRule]) {
+      expect(text).not.toMatch(/greedy|ε|bisection|suggest/i);
+      expect(text.endsWith(".")).toBe(false);
+    }
   });
 });
