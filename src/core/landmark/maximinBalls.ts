@@ -17,7 +17,7 @@ export interface MaximinBallsOptions extends RunControl {
  * nearest = min over landmarks of metric.distance(landmark, row) (relaxNearest.ts, which skips
  * only rows it proves cannot get smaller); the next landmark is the uncovered row with the
  * largest nearest distance, ties to the lowest row; stop when all rows are covered.
- * The one maximin loop of core (maximinNet and netWithBalls run it). The same net, bit for bit, as the plain definition (test/core/support/bruteForce.ts): coverage is the same disjunction of
+ * The one maximin loop of core (netWithBalls runs it). The same net, bit for bit, as the plain definition (test/core/support/bruteForce.ts): coverage is the same disjunction of
  * predicate decisions, and `nearest` takes the same minimum of the same computed distances.
  * Source: T. F. Gonzalez, Theor. Comput. Sci. 38:293–306, 1985.
  * Cost: L ball queries, L nearest-distance passes (pruned by the tree), O(n) per landmark for

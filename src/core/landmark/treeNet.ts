@@ -11,7 +11,7 @@ export const parentSpacing = 3;
  * held equal to it on tables of a few thousand rows by test/core/landmark/fastVariants.test.ts.
  * Greedy ε-net in `order` as a new level of the net tree: a row becomes a landmark when no
  * landmark chosen so far lies within r by the reference predicate (a first-hit search through
- * the tree), so the net is greedyNet's, landmark for landmark. The level hangs under the finest
+ * the tree), so the net is greedyBalls', landmark for landmark. The level hangs under the finest
  * level with radius ≥ 3r (else the coarsest). Stops and removes the level once it would hold
  * more than `cap` landmarks (then returns −1); else returns the level's index.
  * About O(n·s·d) for s candidates per search, against O(n·L·d) for a plain scan.

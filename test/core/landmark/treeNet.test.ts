@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { chebyshev, euclidean, greedyNet, manhattan, type NumericTable } from "../../../src/core/index.ts";
+import { chebyshev, euclidean, manhattan, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { createNetTree } from "../../../src/core/landmark/netTree.ts";
 import { treeNet } from "../../../src/core/landmark/treeNet.ts";
 

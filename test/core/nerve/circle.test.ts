@@ -17,7 +17,8 @@
 // is far (≥ ~1e-3 for N ≤ 120) from r², and no rounding can move a point across the boundary.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, components, euclidean, greedyNet, overlapEdges, rowsToNodes, type NumericTable } from "../../../src/core/index.ts";
+import { ballMembership, components, euclidean, overlapEdges, rowsToNodes, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists } from "../support/bruteForce.ts";
 
 const circle = (n: number): NumericTable => {

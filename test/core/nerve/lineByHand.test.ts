@@ -2,7 +2,8 @@
 // unscaled, Euclidean distance |x − y|, greedy net in file order. All distances are integers,
 // so the ties d = r below are exact.
 import { describe, expect, it } from "vitest";
-import { ballMembership, components, euclidean, greedyNet, overlapEdges, rowsToNodes, type NumericTable } from "../../../src/core/index.ts";
+import { ballMembership, components, euclidean, overlapEdges, rowsToNodes, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists } from "../support/bruteForce.ts";
 
 const line: NumericTable = Object.freeze({ rows: 6, columns: 1, names: ["x"], values: Float64Array.of(0, 1, 2, 3, 5, 6) });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, euclidean, greedyNet, overlapEdges, randomSource, rowsToNodes, shuffledOrder } from "../../../src/core/index.ts";
+import { ballMembership, euclidean, overlapEdges, randomSource, rowsToNodes, shuffledOrder } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists, bruteEdges } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 

@@ -2,7 +2,8 @@
 // (the same data points, under their new row numbers) must give the same graph.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, components, euclidean, greedyNet, overlapEdges, randomSource, rowsToNodes, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { ballMembership, components, euclidean, overlapEdges, randomSource, rowsToNodes, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 

@@ -1,7 +1,8 @@
 // Loops of the graph that the nerve fills: b1 < cycleRank when three balls share rows.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, chebyshev, components, euclidean, greedyNet, nerveBetti, nerveTriangles, overlapEdges, rowsToNodes, type Metric, type NumericTable } from "../../../src/core/index.ts";
+import { ballMembership, chebyshev, components, euclidean, nerveBetti, nerveTriangles, overlapEdges, rowsToNodes, type Metric, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists } from "../support/bruteForce.ts";
 import { independentNerve } from "../support/gf2Betti.ts";
 

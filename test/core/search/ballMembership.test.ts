@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, euclidean, greedyNet, randomSource, rowsToNodes, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { ballMembership, euclidean, randomSource, rowsToNodes, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { allLists, bruteBalls, isWithin } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, euclidean, greedyNet, maximinNet, randomSource, shuffledOrder } from "../../../src/core/index.ts";
+import { ballMembership, euclidean, randomSource, shuffledOrder } from "../../../src/core/index.ts";
+import { greedyNet, maximinNet } from "../support/nets.ts";
 import { firstHitNet } from "../../../src/core/landmark/firstHitNet.ts";
 import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
 import { maximinBalls } from "../../../src/core/landmark/maximinBalls.ts";

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { euclidean, greedyNet, randomSource, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { buildCover, euclidean, parseCsvText, randomSource, shuffledOrder, type NumericTable } from "../../../src/core/index.ts";
+import { greedyNet } from "../support/nets.ts";
 import { bruteGreedyNet, isWithin } from "../support/bruteForce.ts";
 import { gridRadius, gridTable, landmarkRule } from "../support/gridTable.ts";
 
@@ -23,9 +24,9 @@ describe("greedyNet", () => {
     expect(Array.from(greedyNet(copies, euclidean, 1e-9, Uint32Array.of(2, 0, 1, 3)))).toEqual([2]); // worked by hand: the first visited
   });
 
-  it("throws for a radius that is not positive and finite", () => {
-    const one: NumericTable = { rows: 1, columns: 1, names: ["x"], values: Float64Array.of(0) };
-    for (const radius of [0, -1, NaN, Infinity]) expect(() => greedyNet(one, euclidean, radius, [0])).toThrow(`invalid radius: ${radius}`);
+  it("buildCover, the caller that takes a radius from outside, throws for one that is not positive and finite", () => {
+    const one = parseCsvText("x\n0\n");
+    for (const radius of [0, -1, NaN, Infinity]) expect(() => buildCover(one, { features: ["x"], scale: "none", metric: "euclidean", radius, landmarks: "greedy-file-order", seed: 1 })).toThrow(`invalid radius: ${radius}`);
   });
 
   it("reports progress every 256 rows visited (often enough to be cancelled within a fraction of a second)", () => {
