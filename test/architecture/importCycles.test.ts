@@ -1,9 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { fileURLToPath } from "node:url";
-import { fileCycles, importGraph, mutualFolders } from "./importGraph.ts";
+import { fileCycles, importGraph, mutualFolders, upwardImports } from "./importGraph.ts";
 
 const src = fileURLToPath(new URL("../../src", import.meta.url));
 const core = fileURLToPath(new URL("../../src/core", import.meta.url));
+
+// core's layers, bottom first, as in DEVELOPERS.md ("Where things live in core"): a file imports
+// only from its own layer or from layers before it in this list
+const layers = ["params", "control", "random", "stats", "encoding", "metric", "table", "scale", "lists", "search", "landmark", "radius", "nerve", "cover", "sweep", "stability", "export", "demo", "index"];
 
 describe("imports", () => {
   it("no file of src takes part in an import cycle, type-only imports included", () => {
@@ -12,6 +16,10 @@ describe("imports", () => {
 
   it("no two folders of src/core import each other", () => {
     expect(mutualFolders(importGraph(core))).toEqual([]);
+  });
+
+  it("every import between core's layers goes down the layer list of DEVELOPERS.md (index.ts re-exports from all)", () => {
+    expect(upwardImports(importGraph(core), layers)).toEqual([]);
   });
 
   it("params.ts imports nothing", () => {
@@ -31,6 +39,7 @@ describe("the cycle check itself", () => {
     ]);
     expect(fileCycles(graph)).toEqual([["scale/columnTransform.ts", "scale/zScore.ts"]]); // worked by hand
     expect(mutualFolders(graph)).toEqual(["cover ↔ sweep"]); // worked by hand
+    expect(upwardImports(graph, ["table", "scale", "sweep", "cover"])).toEqual(["sweep → cover"]); // worked by hand: sweep/b.ts imports cover/c.ts
   });
 
   it("reads import type, export from and dynamic import statements", () => {

@@ -78,3 +78,22 @@ export function mutualFolders(graph: Map<string, string[]>): string[] {
   }
   return pairs.sort();
 }
+
+/**
+ * Imports that climb the layer list: a file of layer `order[a]` importing one of `order[b]` with
+ * b > a ("from → to"). Layers are core's folders and its top files (named without ".ts"); a
+ * name missing from the list is reported too, so that a new folder must be placed.
+ */
+export function upwardImports(graph: Map<string, string[]>, order: readonly string[]): string[] {
+  const layerOf = (file: string): string => (file.includes("/") ? file.slice(0, file.indexOf("/")) : file.replace(/\.tsx?$/, ""));
+  const found = new Set<string>();
+  for (const [file, targets] of graph) {
+    const from = order.indexOf(layerOf(file));
+    if (from < 0) found.add(`${layerOf(file)} is not in the layer list`);
+    for (const target of targets) {
+      const to = order.indexOf(layerOf(target));
+      if (to > from && from >= 0) found.add(`${layerOf(file)} → ${layerOf(target)}`);
+    }
+  }
+  return [...found].sort();
+}
