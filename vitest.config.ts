@@ -10,7 +10,7 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "node", environment: "node", include: ["test/{core,worker,state,cli}/**/*.test.ts"] },
+        test: { name: "node", environment: "node", include: ["test/{core,worker,state,cli,architecture}/**/*.test.ts"] },
       },
       {
         extends: true,

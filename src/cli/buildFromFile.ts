@@ -1,4 +1,4 @@
-import { buildCover, featureWeights, readingRecord, suggestRadius, type CoverParams, type CoverResult, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
+import { buildCover, featureWeights, readingRecord, defaultRadius, type CoverParams, type CoverResult, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
 import { resolveFeatures, type CommonOptions } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readInput } from "./readInput.ts";
@@ -25,7 +25,7 @@ export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, 
   const oneHot = command.params.oneHot ?? [];
   const weights = featureWeights([...features, ...oneHot], command.params.weights ?? {});
   const encoded = oneHot.length > 0 ? { oneHot } : {};
-  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights, ...encoded });
+  const radius = command.radius ?? defaultRadius(table, { features, scale, metric, missing, weights, ...encoded });
   if (!(radius > 0)) throw new Error("no default radius: the rows do not differ in the chosen columns");
   // the same key order as the workbench's parameters, so both summaries read alike
   const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights, ...encoded };

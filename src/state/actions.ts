@@ -262,7 +262,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const ticket = ++latestBuild;
       endRunningBuild();
       set({ stability: { state: "running", task: "sweep", fraction: 0, error: null } });
-      const range = { steps: s.sweepSteps, ...(s.sweepMin === null ? {} : { radiusMin: s.sweepMin }), ...(s.sweepMax === null ? {} : { radiusMax: s.sweepMax }) };
+      const range = { steps: s.sweepSteps, ...(s.sweepMin === null ? {} : { radiusMin: s.sweepMin }), ...(s.sweepMax === null ? {} : { radiusMax: s.sweepMax }), ...(s.radius > 0 ? { current: s.radius } : {}) };
       const answer = await env.client.send({ type: "sweep", params: sweepParams, range, selection: selectRegionRows(s) }, (progress) => {
         if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
       });

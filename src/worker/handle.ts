@@ -9,7 +9,7 @@ import {
   readTableText,
   regionStability,
   seedStability,
-  suggestRadius,
+  defaultRadius,
   type ByteSource,
   type ParsedTable,
   type ReadOutcome,
@@ -82,13 +82,17 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           keep(request.table);
           return { id: request.id, type: "adopted" };
         case "suggestRadius":
-          return { id: request.id, type: "radius", radius: suggestRadius(loaded(), request.params) };
-        case "build":
-          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onProgress: progress, shouldStop: () => isStopped(request), now }) };
+          return { id: request.id, type: "radius", radius: defaultRadius(loaded(), request.params, { onProgress: (fraction) => progress("suggest", fraction), shouldStop: () => isStopped(request) }) };
+        case "build": {
+          let phase: Progress["phase"] = "scale";
+          const onPhase = (next: Progress["phase"]): void => void (phase = next);
+          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onPhase, onProgress: (fraction) => progress(phase, fraction), shouldStop: () => isStopped(request), now }) };
+        }
         case "sweep": {
-          const { radiusMin, radiusMax, steps } = request.range;
+          const { radiusMin, radiusMax, steps, current } = request.range;
           const options = {
             steps,
+            ...(current === undefined ? {} : { current }),
             ...(radiusMin === undefined ? {} : { radiusMin }),
             ...(radiusMax === undefined ? {} : { radiusMax }),
             now,

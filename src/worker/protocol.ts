@@ -22,6 +22,8 @@ export interface SweepRange {
   readonly radiusMin?: number;
   readonly radiusMax?: number;
   readonly steps: number;
+  /** The radius on screen; the default range is widened to contain it unless the graph there passes the range's node cap of 2,000. */
+  readonly current?: number;
 }
 
 /**

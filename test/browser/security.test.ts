@@ -3,7 +3,7 @@ import { readFile } from "node:fs/promises";
 import { createServer } from "node:net";
 import { expect, it } from "vitest";
 import { contentSecurityPolicy } from "../../vite.config.ts";
-import { dictionaryEncoded } from "../core/parquet/parquetVariants.ts";
+import { dictionaryEncoded } from "../core/table/parquet/parquetVariants.ts";
 import { recordPageErrors, recordRequests, saveScreenshot, settledNodePoint, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // The content security policy of the built page: present in dist/index.html and in the preview

@@ -5,7 +5,7 @@ import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, 
 import { tmpdir } from "node:os";
 import { basename, dirname, join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { parseCsvText, suggestRadius, type CoverParams } from "../../src/core/index.ts";
+import { parseCsvText, defaultRadius, type CoverParams } from "../../src/core/index.ts";
 import { defaultRoles } from "../../src/state/defaultRoles.ts";
 import { demoTable } from "../../src/state/demo.ts";
 import { initialParams } from "../../src/state/slices/paramsSlice.ts";
@@ -92,9 +92,9 @@ describe("shoal build on the demo table writes what the workbench exports", () =
     expectSameAsWorkbench(cosine, uiParams({ radius: 0.05, metric: "cosine", scale: "robust", landmarks: "maximin", seed: 3 }));
   });
 
-  it("without --radius the radius is suggestRadius of the same features, metric and scaling, and the files are the workbench's at that radius", () => {
+  it("without --radius the radius is defaultRadius of the same features, metric and scaling, and the files are the workbench's at that radius", () => {
     const table = parseCsvText(readFileSync(demoPath, "utf8"));
-    const radius = suggestRadius(table, { features: demoFeatures, metric: "euclidean", scale: "zscore", missing: "drop", weights: {} });
+    const radius = defaultRadius(table, { features: demoFeatures, metric: "euclidean", scale: "zscore", missing: "drop", weights: {} });
     expect(radius).toBeGreaterThan(0);
     expect(JSON.parse(readFileSync(join(defaults.dir, "summary.json"), "utf8")).params.radius).toBe(radius);
     expectSameAsWorkbench(defaults, uiParams({ radius }));

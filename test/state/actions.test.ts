@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { strFromU8, unzipSync } from "fflate";
-import { parseCsvText, suggestRadius } from "../../src/core/index.ts";
+import { parseCsvText, defaultRadius } from "../../src/core/index.ts";
 import { createActions } from "../../src/state/actions.ts";
 import { createWorkbenchStore } from "../../src/state/store.ts";
 import { createWorkerClient, type WorkerClient } from "../../src/worker/client.ts";
@@ -31,11 +31,11 @@ describe("actions: loadText", () => {
     expect(store.getState().colorBy).toBe("risk");
   });
 
-  it("suggests the radius that core's suggestRadius gives for the features, then builds with it", async () => {
+  it("suggests the radius that core's defaultRadius gives for the features, then builds with it", async () => {
     const { store, actions } = setup(inThreadClient());
     await actions.loadText(csv, source);
     const s = store.getState();
-    const expected = suggestRadius(parseCsvText(csv), { features: ["x", "y", "risk"], metric: "euclidean", scale: "zscore" });
+    const expected = defaultRadius(parseCsvText(csv), { features: ["x", "y", "risk"], metric: "euclidean", scale: "zscore" });
     expect(s.radius).toBe(expected);
     expect(s.loadStatus).toBe("ready");
     expect(s.source).toEqual(source);

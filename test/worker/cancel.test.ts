@@ -31,6 +31,19 @@ describe("worker cancellation", () => {
     expect(phases).not.toContain("edges"); // it stopped before the later phases
   });
 
+  it("a default-radius request stopped after its first progress report answers 'cancelled', not a radius", () => {
+    let stopped = false;
+    const handle = createHandler({ isStopped: () => stopped, progressInterval: 0 });
+    now(handle(loadText(1, csv), ignore));
+    const phases: string[] = [];
+    const answer = now(handle({ id: 2, type: "suggestRadius", params: { features: ["x", "y"], scale: "zscore", metric: "euclidean" } }, (p: Progress) => {
+      phases.push(p.phase);
+      stopped = true; // the main thread cancels while the rule bisects
+    }));
+    expect(phases[0]).toBe("suggest");
+    expect(answer).toEqual({ id: 2, type: "cancelled" });
+  });
+
   it("shared flags stop every request of a lane with an id up to the stored value, and no other lane", () => {
     const flags = new Int32Array(new SharedArrayBuffer(8));
     const stopped = flagsStopper(flags);

@@ -1,21 +1,21 @@
-import { ballMembership, rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
 import { blockMembershipInto } from "../search/blockMembership.ts";
-import { createListBuilder, transposeBuilt, type ListBuilder } from "../search/listBuilder.ts";
+import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
-import { components } from "../graph/components.ts";
-import { overlapEdges } from "../graph/overlapEdges.ts";
-import { Cancelled } from "../cancel.ts";
+import { components } from "../nerve/components.ts";
+import { overlapEdges } from "../nerve/overlapEdges.ts";
+import { Cancelled, type PhasedControl, type RunControl } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
-import { randomSource, shuffledOrder } from "../random.ts";
-import { greedyBalls, type NetWithBalls } from "../search/greedyBalls.ts";
-import { maximinBalls } from "../search/maximinBalls.ts";
-import { createRowIndex, type RowIndex } from "../search/rowIndex.ts";
+import { greedyBalls } from "../landmark/greedyBalls.ts";
+import { landmarkBalls } from "../landmark/netWithBalls.ts";
+import { visitOrder } from "../landmark/visitOrder.ts";
+import { createRowIndex } from "../search/rowIndex.ts";
 import type { ParsedTable } from "../table/types.ts";
 import type { CoverGraph } from "./coverGraph.ts";
-import { prepareFeatures, type PreparedFeatures } from "./prepareFeatures.ts";
-import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule, type MissingPolicy } from "./params.ts";
-import { nerveLoops, type LoopCounts } from "../sweep/nerveLoops.ts";
+import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
+import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "../params.ts";
+import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 
@@ -29,11 +29,13 @@ export interface CoverResult extends Omit<PreparedFeatures, "table">, CoverGraph
   readonly timings: Readonly<Record<BuildPhase, number>>;
 }
 
-export interface BuildOptions {
-  /** Progress by phase; a throw from it (core's Cancelled) stops the build. */
-  onProgress?: (phase: BuildPhase, fraction: number) => void;
-  /** Asked inside long steps that report no progress (selecting, scaling, the tree); true stops the build with Cancelled. */
-  shouldStop?: () => boolean;
+/**
+ * onPhase announces each phase, onProgress reports the fraction of the current phase (a throw
+ * from either, core's Cancelled, stops the build); shouldStop is asked inside long steps,
+ * including those that report no progress (selecting, scaling, the tree), and true stops the
+ * build with Cancelled.
+ */
+export interface BuildOptions extends PhasedControl<BuildPhase> {
   now?: () => number;
   /** Compute triangles and b1 (default true). */
   loops?: boolean;
@@ -57,10 +59,14 @@ export interface BuildOptions {
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
   const { onProgress, now = Date.now, loops = true } = options;
+  const enter = (phase: BuildPhase): void => {
+    options.onPhase?.(phase);
+    onProgress?.(0);
+  };
   const metric = maybeMetric(params.metric);
   maybeScale(params.scale);
   const rule = maybeLandmarkRule(params.landmarks);
-  const missing = maybeMissingPolicy(params.missing ?? "drop");
+  maybeMissingPolicy(params.missing ?? "drop");
   if (!(params.radius > 0) || !Number.isFinite(params.radius)) throw new Error(`invalid radius: ${params.radius}`);
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
 
@@ -71,8 +77,8 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
     t = t1;
     return elapsed;
   };
-  onProgress?.("scale", 0);
-  const found = landmarksAndBalls(parsed, params, metric, missing, rule, lap, options);
+  enter("scale");
+  const found = landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap });
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -82,16 +88,16 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const local = rowLists ?? rowsToNodes(rowNodes, centers.length);
   const memberTime = lap();
 
-  onProgress?.("edges", 0);
+  enter("edges");
   const edges = overlapEdges(rowNodes, centers.length, local);
   const edgeTime = lap();
 
   const { component, count } = components(centers.length, edges.source, edges.target);
   const componentTime = lap();
 
-  onProgress?.("loops", 0);
+  enter("loops");
   // b1 by the spanning-forest route (same value as nerveBetti's full reduction, without listing every triangle)
-  const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, { onProgress: (f) => onProgress?.("loops", f) }) : null;
+  const betti = loops ? nerveLoops(rowNodes, centers.length, edges, count, onProgress ? { onProgress } : {}) : null;
   const loopTime = lap();
 
   const toParsedRow = (i: number): number => prepared.usedRows[i]!;
@@ -122,6 +128,16 @@ type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
   | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer | null };
 
+/** What a build has settled before it reads the rows: the metric, the rule, its clock and its hooks. */
+interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
+  /** Announces a phase and reports its start. */
+  readonly enter: (phase: BuildPhase) => void;
+  readonly metric: Metric;
+  readonly rule: LandmarkRule;
+  /** Milliseconds since the last lap. */
+  readonly lap: () => number;
+}
+
 interface FoundNet {
   /** Landmark rows (of the prepared table), in the order chosen. */
   readonly centers: Uint32Array;
@@ -140,41 +156,34 @@ interface FoundNet {
  * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net;
  * the caller times the balls, which it turns into lists by row.
  */
-function landmarksAndBalls(
-  parsed: ParsedTable,
-  params: CoverParams,
-  metric: Metric,
-  missing: MissingPolicy,
-  rule: LandmarkRule,
-  lap: () => number,
-  { onProgress, shouldStop }: BuildOptions,
-): FoundNet {
+function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): FoundNet {
+  const { metric, rule, lap, enter, onProgress, shouldStop } = run;
   const step = (): void => {
     if (shouldStop?.()) throw new Cancelled("the build");
   };
-  const { table, ...rest } = prepareFeatures(parsed, params, metric, missing, step);
+  const { table, ...rest } = prepareFeatures(parsed, params, step);
   const prepared = { ...rest, rows: table.rows };
   const scaleTime = lap();
   const n = table.rows;
-  const netProgress = (done: number, total: number): void => onProgress?.("landmarks", done / total);
-  const membersProgress = (done: number, total: number): void => onProgress?.("members", done / total);
+  const control: RunControl = { ...(shouldStop ? { shouldStop } : {}), ...(onProgress ? { onProgress } : {}) };
+  const membersProgress = (done: number, total: number): void => onProgress?.(done / total);
 
-  onProgress?.("landmarks", 0);
+  enter("landmarks");
   const indexOptions = { onStep: step }; // a chance to cancel while the tree is built
   const ordered = rule === "maximin" ? null : treeOrderIndex(table, metric, indexOptions); // `table` is rearranged from here on
   if (ordered?.rowAt) {
     const { index, rowAt } = ordered;
-    // visit the rows in file order (or the seed's order) at their tree positions
+    // visit the rows in the rule's order (visitOrder), at their tree positions
     let lists = createListBuilder(n, { packed: true });
-    const net = greedyBalls(index, params.radius, visitOrder(rowAt, rule, params.seed), { onProgress: netProgress, into: lists });
+    const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...control, into: lists });
     const landmarkTime = lap();
-    onProgress?.("members", 0);
+    enter("members");
     if (lists.offsets.length - 1 === net.landmarks.length) {
       // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
       lists = createListBuilder(n, { packed: true });
-      blockMembershipInto(lists, index, params.radius, net.landmarks, membersProgress);
+      blockMembershipInto(lists, index, params.radius, net.landmarks, control);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
     // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
@@ -184,22 +193,20 @@ function landmarksAndBalls(
     return { centers, balls: { kind: "positions", lists, rowAt, spare }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
-  const net = netWithBalls(index, params.radius, rule, params.seed, (fraction) => onProgress?.("landmarks", fraction));
+  // the net's share of progress goes to "landmarks"; balls it did not keep are found inside
+  const net = landmarkBalls(index, params.radius, rule, params.seed, { ...control, firstHit: true, what: "the build" });
   const centers = net.landmarks;
   const landmarkTime = lap();
-  onProgress?.("members", 0);
-  const lists = net.members ?? ballMembership(index.table, metric, params.radius, centers, membersProgress, { index });
-  if (net.members) for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
-  return { centers, balls: { kind: "rows", lists }, prepared, scaleTime, landmarkTime };
+  enter("members");
+  for (let k = 64; k <= centers.length; k += 64) membersProgress(k, centers.length);
+  return { centers, balls: { kind: "rows", lists: net.members }, prepared, scaleTime, landmarkTime };
 }
 
-/** Tree positions of the rows in file order, or in the order shuffled by the seed (a new array the net alone holds). */
-function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint32Array {
+/** The visit order with each row replaced by its tree position (in place; the order is the caller's own). */
+function atTreePositions(order: Uint32Array, rowAt: Uint32Array): Uint32Array {
   const n = rowAt.length;
   const positionOf = new Uint32Array(n);
   for (let p = 0; p < n; ++p) positionOf[rowAt[p]!] = p;
-  if (rule !== "greedy-shuffled") return positionOf;
-  const order = shuffledOrder(n, randomSource(seed));
   for (let k = 0; k < n; ++k) order[k] = positionOf[order[k]!]!;
   return order;
 }
@@ -207,15 +214,4 @@ function visitOrder(rowAt: Uint32Array, rule: LandmarkRule, seed: number): Uint3
 /** For each row, the nodes whose balls hold it, ascending. */
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
   return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
-}
-
-/** Landmarks by rule, as chooseLandmarks picks them, together with their balls. */
-function netWithBalls(index: RowIndex, radius: number, rule: LandmarkRule, seed: number, onProgress: (fraction: number) => void): NetWithBalls {
-  const n = index.table.rows;
-  if (rule === "maximin") {
-    if (n === 0) return { landmarks: new Uint32Array(0), members: { offsets: Uint32Array.of(0), items: new Uint32Array(0) } };
-    return maximinBalls(index, radius, Math.floor(randomSource(seed)() * n), { onProgress: (done, total) => onProgress(done / total) });
-  }
-  const order = rule === "greedy-shuffled" ? shuffledOrder(n, randomSource(seed)) : Uint32Array.from({ length: n }, (_, i) => i);
-  return greedyBalls(index, radius, order, { onProgress: (done, total) => onProgress(done / total) });
 }

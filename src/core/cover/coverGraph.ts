@@ -1,5 +1,5 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
-import type { EdgeList } from "../graph/overlapEdges.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
+import type { EdgeList } from "../nerve/overlapEdges.ts";
 
 /** The graph part of a cover, shared by a single build and each radius of a sweep (rows are parsed-table rows). */
 export interface CoverGraph {

@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 import { categoryCounts, majorityLevel } from "../table/categoryCounts.ts";
 import type { Categories } from "../table/types.ts";
 

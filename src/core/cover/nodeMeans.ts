@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /**
  * Mean of a column over each node's members, skipping missing values (NaN).

@@ -1,5 +1,6 @@
-/** Names of the metrics Shoal knows; one module per metric under core/metric/. */
-export type MetricName = "euclidean" | "manhattan" | "chebyshev" | "cosine" | "correlation";
+import type { MetricName } from "../params.ts";
+
+export type { MetricName };
 
 /**
  * A distance on rows of a row-major matrix. `within` is the reference predicate d(x, y) ≤ r,

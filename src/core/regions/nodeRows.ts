@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /**
  * The rows of a set of nodes: the union of their members, each row once, ascending. This is how

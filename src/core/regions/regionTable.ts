@@ -1,4 +1,4 @@
-import { Cancelled } from "../cancel.ts";
+import { Cancelled } from "../control.ts";
 import { benjaminiHochberg } from "../stats/benjaminiHochberg.ts";
 import type { ParsedTable } from "../table/types.ts";
 import { compareCategorical, type CategoricalComparison } from "./compareCategorical.ts";

@@ -1,5 +1,11 @@
+import type { StepHook } from "../control.ts";
 import type { NumericTable } from "../table/types.ts";
-import type { ScaledTable } from "./zScore.ts";
+
+export interface ScaledTable {
+  readonly table: NumericTable;
+  /** Names of columns that were constant (zero spread); they are set to 0. */
+  readonly constantColumns: readonly string[];
+}
 
 /**
  * Applies x ← (x − center) / spread per column, where `fit` gives (center, spread) from column j
@@ -10,7 +16,7 @@ import type { ScaledTable } from "./zScore.ts";
  */
 export type ColumnFit = (values: Float64Array, j: number, d: number, n: number) => { center: number; spread: number };
 
-export function columnTransform(input: NumericTable, into: Float64Array | undefined, fit: ColumnFit, onStep?: () => void): ScaledTable {
+export function columnTransform(input: NumericTable, into: Float64Array | undefined, fit: ColumnFit, onStep?: StepHook): ScaledTable {
   const { rows: n, columns: d, values } = input;
   const out = into ?? new Float64Array(values.length);
   if (out.length !== values.length) throw new Error(`scaling target holds ${out.length} values, not ${values.length}`);

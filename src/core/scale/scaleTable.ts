@@ -1,8 +1,10 @@
-import type { ScaleName } from "../cover/params.ts";
+import type { StepHook } from "../control.ts";
+import type { ScaleName } from "../params.ts";
 import type { NumericTable } from "../table/types.ts";
 import { minMax } from "./minMax.ts";
 import { robust } from "./robust.ts";
-import { zScore, type ScaledTable } from "./zScore.ts";
+import type { ScaledTable } from "./columnTransform.ts";
+import { zScore } from "./zScore.ts";
 
 /**
  * Scales every column once, before any distance, then multiplies column j by its weight w_j
@@ -11,7 +13,7 @@ import { zScore, type ScaledTable } from "./zScore.ts";
  * no longer needs unscaled: it saves a copy of the table); otherwise `input` is left as it was.
  * `onStep` is called between columns (a chance to cancel by throwing).
  */
-export function scaleTable(input: NumericTable, scale: ScaleName, weights: Readonly<Record<string, number>> = {}, options: { readonly overwrite?: boolean; readonly onStep?: () => void } = {}): ScaledTable {
+export function scaleTable(input: NumericTable, scale: ScaleName, weights: Readonly<Record<string, number>> = {}, options: { readonly overwrite?: boolean; readonly onStep?: StepHook } = {}): ScaledTable {
   const { overwrite = false, onStep } = options;
   for (const [name, w] of Object.entries(weights)) {
     if (!input.names.includes(name)) throw new Error(`weight for a column that is not a feature: ${name}`);

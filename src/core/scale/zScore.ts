@@ -1,11 +1,7 @@
+import type { StepHook } from "../control.ts";
 import type { NumericTable } from "../table/types.ts";
-import { columnTransform } from "./columnTransform.ts";
+import { columnTransform, type ScaledTable } from "./columnTransform.ts";
 
-export interface ScaledTable {
-  readonly table: NumericTable;
-  /** Names of columns that were constant (zero spread); they are set to 0. */
-  readonly constantColumns: readonly string[];
-}
 
 /**
  * Z-score scaling per column: z = (x − mean) / s, with s the sample standard deviation
@@ -15,7 +11,7 @@ export interface ScaledTable {
  * table (s is undefined there). O(n·d); returns a new table.
  * @example zScore({ rows: 3, columns: 1, names: ["x"], values: Float64Array.of(1, 2, 3) }).table.values // => Float64Array [-1, 0, 1]
  */
-export function zScore(input: NumericTable, into?: Float64Array, onStep?: () => void): ScaledTable {
+export function zScore(input: NumericTable, into?: Float64Array, onStep?: StepHook): ScaledTable {
   return columnTransform(input, into, (values, j, d, n) => {
     let mean = 0;
     let m2 = 0;

@@ -1,5 +1,6 @@
 import { boxBound } from "./boxBound.ts";
 import { scanLeaf } from "./leafScan.ts";
+import type { TreeQuery } from "./treeQuery.ts";
 import { isInBall, judgeRadius, type RowIndex } from "./rowIndex.ts";
 
 /**
@@ -28,7 +29,8 @@ export function ballRows(index: RowIndex, centre: number, radius: number): Uint3
   const limit = space.threshold(radius);
   const { norm } = space;
   let scanned = n;
-  if (index.mode === "flat") count = scanLeaf(norm, tree.coords, d, q, 0, 0, n, limit, found, 0);
+  const query: TreeQuery = { norm, dims: d, coords: tree.coords, lo: tree.lo, hi: tree.hi, centre: q, centreBase: 0, limit };
+  if (index.mode === "flat") count = scanLeaf(query, 0, n, found, 0);
   else {
     scanned = 0;
     const stack = index.stack;
@@ -36,10 +38,10 @@ export function ballRows(index: RowIndex, centre: number, radius: number): Uint3
     stack[top++] = 0;
     while (top > 0) {
       const node = stack[--top]!;
-      if (boxBound(norm, tree.lo, tree.hi, node * d, q, 0, d, limit) > limit) continue;
+      if (boxBound(query, node * d) > limit) continue;
       const child = tree.firstChild[node]!;
       if (child === 0) {
-        count = scanLeaf(norm, tree.coords, d, q, 0, tree.start[node]!, tree.end[node]!, limit, found, count);
+        count = scanLeaf(query, tree.start[node]!, tree.end[node]!, found, count);
         scanned += tree.end[node]! - tree.start[node]!;
       } else {
         stack[top++] = child + 1;

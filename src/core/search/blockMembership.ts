@@ -1,10 +1,12 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import { checkStop, type RunControl } from "../control.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 import type { KdTree } from "./kdTree.ts";
 import { boxBound } from "./boxBound.ts";
 import { scanLeaf } from "./leafScan.ts";
-import { closeLists, createListBuilder, finishLists, reserveLists, type ListBuilder } from "./listBuilder.ts";
+import { closeLists, createListBuilder, finishLists, reserveLists, type ListBuilder } from "../lists/listBuilder.ts";
 import { isInBall, judgeRadius, type RowIndex } from "./rowIndex.ts";
 import type { Norm } from "./searchSpace.ts";
+import type { TreeQuery } from "./treeQuery.ts";
 
 const chunk = 64; // landmarks per pass: their coordinates stay in the first-level cache with a leaf's rows
 
@@ -17,6 +19,8 @@ interface Pass {
   readonly limit: number;
   readonly landmarks: Uint32Array;
   readonly marks: Float64Array;
+  /** The tree query, its centre moved to each landmark of the group in turn. */
+  readonly query: TreeQuery;
   readonly pool: Uint32Array;
   first: number;
   pairs: Uint32Array;
@@ -36,26 +40,29 @@ interface Pass {
  * Reports progress after every 64 landmarks. Cost: O(n·L·d) at worst, O(m log m) for sorting.
  * @example blockMembership(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 2)) // => offsets [0, 2, 5], items [0, 1, 1, 2, 3]
  */
-export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): CompressedLists {
+export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl = {}): CompressedLists {
   const builder = createListBuilder(index.table.rows);
-  blockMembershipInto(builder, index, radius, landmarks, onProgress);
+  blockMembershipInto(builder, index, radius, landmarks, control);
   return finishLists(builder);
 }
 
 /** blockMembership's lists appended to `builder`, one per landmark in order (no final copy). */
-export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, onProgress?: (done: number, total: number) => void): void {
+export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl = {}): void {
   const { table, space, tree } = index;
   if (!space || !tree) throw new Error("blockMembership needs a search space");
   const d = table.columns;
   judgeRadius(index, radius);
+  const marks = new Float64Array(chunk * d);
+  const limit = space.threshold(radius);
   const pass: Pass = {
     index,
     tree,
     norm: space.norm,
     radius,
-    limit: space.threshold(radius),
+    limit,
     landmarks,
-    marks: new Float64Array(chunk * d),
+    marks,
+    query: { norm: space.norm, dims: tree.dims, coords: tree.coords, lo: tree.lo, hi: tree.hi, centre: marks, centreBase: 0, limit },
     pool: new Uint32Array((treeDepth(tree.firstChild) + 2) * chunk), // one list per level
     first: 0,
     pairs: new Uint32Array(2 * chunk),
@@ -77,20 +84,24 @@ export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radiu
     if (index.mode === "probe") index.mode = pass.scanned > 0.75 * group * table.rows ? "flat" : "tree";
     pass.bounded = index.mode !== "flat";
     appendGroup(builder, pass.pairs, pass.size, group);
-    if (onProgress && group === chunk) onProgress(first + chunk, landmarks.length);
+    if (group === chunk) {
+      checkStop(control, "the balls");
+      control.onProgress?.((first + chunk) / landmarks.length);
+    }
   }
 }
 
 /** Filters the level's landmark list by the node's box, then recurses, or scans the leaf. */
 function visit(pass: Pass, node: number, level: number, count: number): void {
-  const { tree, pool, marks, limit, norm } = pass;
+  const { tree, pool, limit, query } = pass;
   const d = tree.dims;
   const from = level * chunk;
   const into = from + chunk;
   let kept = 0;
   for (let t = 0; t < count; ++t) {
     const l = pool[from + t]!;
-    if (!pass.bounded || boxBound(norm, tree.lo, tree.hi, node * d, marks, l * d, d, limit) <= limit) pool[into + kept++] = l;
+    query.centreBase = l * d;
+    if (!pass.bounded || boxBound(query, node * d) <= limit) pool[into + kept++] = l;
   }
   if (kept === 0) return;
   const child = tree.firstChild[node]!;
@@ -105,7 +116,8 @@ function visit(pass: Pass, node: number, level: number, count: number): void {
   pass.scanned += kept * (end - start);
   for (let t = 0; t < kept; ++t) {
     const l = pool[into + t]!;
-    const hits = scanLeaf(norm, tree.coords, d, marks, l * d, start, end, limit, found, 0);
+    query.centreBase = l * d;
+    const hits = scanLeaf(query, start, end, found, 0);
     if (pass.size + 2 * hits > pass.pairs.length) {
       const grown = new Uint32Array(Math.max(2 * pass.pairs.length, pass.size + 2 * hits));
       grown.set(pass.pairs.subarray(0, pass.size));

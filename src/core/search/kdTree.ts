@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 /**
  * A k-d tree over the rows of a row-major matrix, with the tight bounding box of every node.
  * Each node covers a contiguous range of positions; `rowAt` maps positions to rows and `coords`
@@ -25,7 +26,7 @@ export interface KdTreeOptions {
   /** Rearrange the caller's `points` into tree order (they become `coords`) instead of copying them. */
   readonly inPlace?: boolean;
   /** Called before splitting a node once 2¹⁶ rows were split since the last call, e.g. to check for cancellation by throwing. */
-  readonly onStep?: () => void;
+  readonly onStep?: StepHook;
 }
 
 export const defaultLeafSize = 32; // rows per leaf; 16–64 differ by < 10 % in bench/run.ts timings

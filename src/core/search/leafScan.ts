@@ -1,28 +1,19 @@
-import type { Norm } from "./searchSpace.ts";
+import type { TreeQuery } from "./treeQuery.ts";
 
 /**
- * Candidate positions [from, to) of a tree: writes p to out for every position
- * whose norm value Σ δₖ², Σ |δₖ| or max |δₖ| (δₖ = cₖ − xₖ, column order, cₖ = centre[centreBase + k])
- * is ≤ limit, and returns
- * the new count. Four positions are scanned together (independent sums keep the processor busy;
+ * Candidate positions [from, to) of a tree: writes p to out (from index `count`) for every
+ * position whose norm value Σ δₖ², Σ |δₖ| or max |δₖ| (δₖ = cₖ − xₖ, column order,
+ * cₖ = query.centre[query.centreBase + k], xₖ = query.coords[p · dims + k]) is ≤ query.limit, and
+ * returns the new count. Four positions are scanned together (independent sums keep the processor busy;
  * each sum still runs in column order), and the scan of the four stops as soon as all four
  * partial values exceed the limit: the terms are non-negative and floating-point addition of
  * non-negative numbers is monotone, so a partial value above the limit proves the full value is
  * above it too (the same holds for a running maximum). A NaN value is never ≤ limit. O((to − from)·d).
- * @example scanLeaf("squares", Float64Array.of(0, 3), 1, Float64Array.of(1), 0, 0, 2, 1, new Uint32Array(2), 0) // => 1 (position 0 only)
+ * The inner loops below take their arguments one by one, so that they read locals only.
+ * @example scanLeaf({ norm: "squares", dims: 1, coords: Float64Array.of(0, 3), centre: Float64Array.of(1), centreBase: 0, limit: 1, … }, 0, 2, new Uint32Array(2), 0) // => 1 (position 0 only)
  */
-export function scanLeaf(
-  norm: Norm,
-  coords: Float64Array,
-  dims: number,
-  centre: Float64Array,
-  centreBase: number,
-  from: number,
-  to: number,
-  limit: number,
-  out: Uint32Array,
-  count: number,
-): number {
+export function scanLeaf(query: TreeQuery, from: number, to: number, out: Uint32Array, count: number): number {
+  const { norm, coords, dims, centre, centreBase, limit } = query;
   if (norm === "squares") return scanSquares(coords, dims, centre, centreBase, from, to, limit, out, count);
   return scanAbsolute(norm === "max", coords, dims, centre, centreBase, from, to, limit, out, count);
 }

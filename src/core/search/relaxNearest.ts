@@ -1,5 +1,6 @@
 import { boxBound } from "./boxBound.ts";
 import type { RowIndex } from "./rowIndex.ts";
+import type { TreeQuery } from "./treeQuery.ts";
 
 /** Per-node upper bounds on `nearest` over the node's uncovered rows, kept between calls. */
 export interface NearestBounds {
@@ -31,10 +32,12 @@ export function relaxNearest(index: RowIndex, landmark: number, nearest: Float64
   const q = index.centre;
   for (let k = 0; k < d; ++k) q[k] = values[landmark * d + k]!;
   const squares = space.norm === "squares";
+  const query: TreeQuery = { norm: space.norm, dims: d, coords: tree.coords, lo: tree.lo, hi: tree.hi, centre: q, centreBase: 0, limit: Infinity };
   const relax = (node: number): number => {
     const bound = upper[node]!;
     if (bound === -Infinity) return bound;
-    const box = boxBound(space.norm, tree.lo, tree.hi, node * d, q, 0, d, squares ? bound * bound : bound);
+    query.limit = squares ? bound * bound : bound;
+    const box = boxBound(query, node * d);
     if ((squares ? Math.sqrt(box) : box) >= bound) return bound;
     const child = tree.firstChild[node]!;
     let largest = -Infinity;

@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import type { Metric } from "../metric/types.ts";
 import type { NumericTable } from "../table/types.ts";
 import { defaultLeafSize, kdTree, type KdTree } from "./kdTree.ts";
@@ -36,7 +37,7 @@ export interface RowIndexOptions {
   /** Rows per k-d tree leaf (default 32). */
   leafSize?: number;
   /** Called now and then while the tree is built (kdTree's onStep), e.g. to check for cancellation. */
-  onStep?: () => void;
+  onStep?: StepHook;
 }
 
 /**

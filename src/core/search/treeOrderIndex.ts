@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import type { Metric } from "../metric/types.ts";
 import type { NumericTable } from "../table/types.ts";
 import { defaultLeafSize, kdTree } from "./kdTree.ts";
@@ -35,7 +36,7 @@ export function treeOrderIndex(table: NumericTable, metric: Metric, options: Row
 }
 
 /** Rearranges row-major rows in place so that row p holds what row rowAt[p] held, by following the permutation's cycles; `onStep` every 2¹⁶ rows. O(n·d). */
-export function permuteRows(values: Float64Array, d: number, rowAt: Uint32Array, onStep?: () => void): void {
+export function permuteRows(values: Float64Array, d: number, rowAt: Uint32Array, onStep?: StepHook): void {
   const n = rowAt.length;
   const done = new Uint8Array(n);
   const held = new Float64Array(d);

@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /** Row pairs (first[p], second[p]), first < second, each sharing at least one ball. */
 export interface RowPairs {

@@ -1,5 +1,5 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
-import type { EdgeList } from "../graph/overlapEdges.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
+import type { EdgeList } from "../nerve/overlapEdges.ts";
 
 export interface RegionMatch {
   /** Matched nodes (0-based) in the order they were added; empty when no ball holds a selected row. */

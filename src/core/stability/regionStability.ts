@@ -1,5 +1,5 @@
 import type { ParsedTable } from "../table/types.ts";
-import { prepareRows, type SweepParams } from "../sweep/prepareRows.ts";
+import { prepareRows, type SweepParams } from "../search/prepareRows.ts";
 import { sweepPrepared, type RadiusSweep, type SweepOptions } from "../sweep/radiusSweep.ts";
 import { matchRegion } from "./matchRegion.ts";
 import { selectionMask } from "./selectionMask.ts";

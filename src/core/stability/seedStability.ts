@@ -1,11 +1,11 @@
-import type { CoverParams } from "../cover/params.ts";
+import type { CoverParams } from "../params.ts";
 import { randomSource } from "../random.ts";
 import { quantileSorted } from "../stats/quantileSorted.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { checkStop, type RunControl } from "../sweep/runControl.ts";
+import { checkStop, type RunControl } from "../control.ts";
 import { coverFromBalls } from "../sweep/coverFromBalls.ts";
-import { netWithBalls, type Balls } from "../sweep/netWithBalls.ts";
-import { prepareRows } from "../sweep/prepareRows.ts";
+import { netWithBalls, type Balls } from "../landmark/netWithBalls.ts";
+import { prepareRows } from "../search/prepareRows.ts";
 import { coMemberPairs, sharedBalls, type RowPairs } from "./coMemberPairs.ts";
 import { matchRegion } from "./matchRegion.ts";
 import { selectionMask } from "./selectionMask.ts";
@@ -73,7 +73,7 @@ export function seedStability(parsed: ParsedTable, params: CoverParams, options:
   for (let s = 0; s < count; ++s) {
     checkStop(options, "the seed stability run");
     const part: RunControl = { ...(options.shouldStop ? { shouldStop: options.shouldStop } : {}), onProgress: (f) => options.onProgress?.((0.8 * (s + f)) / count) };
-    const balls = netWithBalls(prepared.index, params.radius, "greedy-shuffled", seeds[s]!, part);
+    const balls = netWithBalls(prepared.index, params.radius, "greedy-shuffled", seeds[s]!, { ...part, what: "the seed stability run" });
     const cover = coverFromBalls(prepared, params.radius, balls, part);
     builds.push(balls);
     figures.nodes[s] = balls.landmarks.length;

@@ -1,4 +1,4 @@
-import type { CompressedLists } from "../graph/ballMembership.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 import type { SweepCover } from "./coverFromBalls.ts";
 
 /** The per-radius figures of a sweep. Shares are of the rows used; NaN when no row is used. */

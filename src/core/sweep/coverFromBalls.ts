@@ -1,10 +1,10 @@
 import type { CoverGraph } from "../cover/coverGraph.ts";
-import { components } from "../graph/components.ts";
-import { overlapEdges } from "../graph/overlapEdges.ts";
-import type { RunControl } from "./runControl.ts";
-import { nerveLoops, type LoopCounts } from "./nerveLoops.ts";
-import type { Balls } from "./netWithBalls.ts";
-import type { PreparedRows } from "./prepareRows.ts";
+import { components } from "../nerve/components.ts";
+import { overlapEdges } from "../nerve/overlapEdges.ts";
+import type { RunControl } from "../control.ts";
+import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
+import type { Balls } from "../landmark/netWithBalls.ts";
+import type { PreparedRows } from "../search/prepareRows.ts";
 
 /** The graph of one sweep radius: the same graph fields as a single build (CoverGraph). */
 export interface SweepCover extends CoverGraph {

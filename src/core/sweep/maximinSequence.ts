@@ -1,9 +1,9 @@
-import { rowsToNodes, type CompressedLists } from "../graph/ballMembership.ts";
+import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
 import { ballRows } from "../search/ballRows.ts";
-import { appendList, createListBuilder, finishLists } from "../search/listBuilder.ts";
+import { appendList, createListBuilder, finishLists } from "../lists/listBuilder.ts";
 import type { RowIndex } from "../search/rowIndex.ts";
-import { checkStop, type RunControl } from "./runControl.ts";
-import type { Balls } from "./netWithBalls.ts";
+import { checkStop, type RunControl } from "../control.ts";
+import type { Balls } from "../landmark/netWithBalls.ts";
 
 /** The farthest-point order at the smallest radius, with each landmark's insertion distance. */
 export interface MaximinSequence {

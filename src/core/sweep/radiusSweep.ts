@@ -1,13 +1,13 @@
 import type { ParsedTable } from "../table/types.ts";
-import type { RunControl } from "./runControl.ts";
+import { partOf, type RunControl } from "../control.ts";
 import { coverFigures } from "./coverFigures.ts";
 import type { SweepCover } from "./coverFromBalls.ts";
-import { defaultRange, defaultRangeRule } from "./defaultRange.ts";
+import { defaultRange, defaultRangeRule } from "../radius/defaultRange.ts";
 import { ascendingRadii, logSpacedRadii } from "./logSpacedRadii.ts";
-import type { Balls } from "./netWithBalls.ts";
-import { plateaus, type Plateau } from "./plateaus.ts";
-import { prepareRows, type PreparedRows, type SweepParams } from "./prepareRows.ts";
-import { suggestionRule, suggestStart, type StartSuggestion } from "./suggestStart.ts";
+import type { Balls } from "../landmark/netWithBalls.ts";
+import { plateaus, type Plateau } from "../radius/plateaus.ts";
+import { prepareRows, type PreparedRows, type SweepParams } from "../search/prepareRows.ts";
+import { plateauMiddle, plateauMiddleRule, type PlateauMiddle } from "../radius/plateauMiddle.ts";
 import { sweepCovers } from "./sweepCovers.ts";
 import { emptyFigures, setFigures, type SweepFigures } from "./sweepFigures.ts";
 
@@ -21,6 +21,8 @@ export interface SweepOptions extends RunControl {
   readonly radiusMax?: number;
   /** Number of log-spaced radii, at least 2 (default 24). */
   readonly steps?: number;
+  /** The radius on screen: the default range is widened to contain it unless the graph there passes the range's node cap of 2,000. */
+  readonly current?: number;
   /** Receives each radius's whole cover (index into the ascending radii) and its balls in prepared-table rows. */
   readonly onCover?: (index: number, cover: SweepCover, balls: Balls) => void;
   /** Clock for `timings` (core has no `performance`); default Date.now. */
@@ -36,7 +38,9 @@ export interface RadiusSweep {
   readonly figures: SweepFigures;
   /** Runs of consecutive radii with unchanged b0 and b1, ascending. */
   readonly plateaus: readonly Plateau[];
-  readonly suggestion: StartSuggestion | null;
+  /** The plateau middle (field name kept for the readers in cli/ and ui/). */
+  readonly suggestion: PlateauMiddle | null;
+  /** The plateau-middle rule in plain words. */
   readonly suggestionRule: string;
   /** Milliseconds by `now`: selecting, scaling and indexing the rows, finding the default range, building the covers. */
   readonly timings: { readonly prepare: number; readonly range: number; readonly covers: number };
@@ -45,12 +49,16 @@ export interface RadiusSweep {
 /**
  * Radius-stability sweep: the cover graph at each of a list of radii, with the figures of each
  * (nodes, edges, b0, b1, cycle rank, balls per row, largest node's and largest component's shares
- * of the rows), its plateaus of unchanged (b0, b1) and a suggested starting radius. Every
- * radius's graph equals buildCover's at that radius; rows are scaled and indexed once, maximin
- * nets are prefixes of one farthest-point order, and b1 is found by a faster exact route
- * (sweepCovers.ts). Default radii: 24 log-spaced over the default range (defaultRange.ts).
- * Progress goes to `onProgress`; `shouldStop` is asked between radii and inside long loops and
- * stops the run with core's Cancelled error (cancel.ts). Cost: see sweepCovers.
+ * of the rows), its plateaus of unchanged (b0, b1) and its plateau middle (radius/plateauMiddle.ts).
+ * Every radius's graph equals buildCover's at that radius: the rows are selected, scaled and
+ * indexed once (search/prepareRows.ts), and each radius's net and balls come from the same
+ * netWithBalls as the build's (landmark/netWithBalls.ts), except that maximin nets above the
+ * smallest radius are taken as prefixes of one farthest-point order when a check proves them
+ * equal (maximinSequence.ts); b1 comes from nerveLoops, as in the build. Default radii: 24
+ * log-spaced over the default range (radius/defaultRange.ts), widened to contain `current`.
+ * Progress goes to `onProgress` (a tenth for the range when it is computed, the rest by radius);
+ * `shouldStop` is asked between radii and inside long loops and stops the run with core's
+ * Cancelled error (control.ts). Cost: see sweepCovers.
  * @example radiusSweep(24 points evenly on a circle, { features: ["x", "y"], scale: "none", … }, { radii: logSpacedRadii(0.05, 3, 24) }).figures.b1[10] // => 1
  */
 export function radiusSweep(parsed: ParsedTable, params: SweepParams, options: SweepOptions = {}): RadiusSweep {
@@ -62,12 +70,9 @@ export function radiusSweep(parsed: ParsedTable, params: SweepParams, options: S
 
 /** radiusSweep on rows already prepared (prepareRows) from a table of `rowsRead` rows, which took `prepareTime` ms. */
 export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: SweepParams, options: SweepOptions = {}, prepareTime = 0): RadiusSweep {
-  const { now = Date.now, onCover, onProgress, shouldStop } = options;
+  const { now = Date.now, onCover } = options;
   const started = now();
-  const part = (from: number, span: number): RunControl => ({
-    ...(shouldStop ? { shouldStop } : {}),
-    onProgress: (fraction) => onProgress?.(from + span * fraction),
-  });
+  const part = (from: number, span: number): RunControl => partOf(options, from, span);
   let rule: string | null = null;
   let radii: Float64Array;
   let rangeShare = 0;
@@ -76,7 +81,7 @@ export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: 
     let { radiusMin: min, radiusMax: max } = options;
     if (min === undefined || max === undefined) {
       rangeShare = 0.1;
-      const found = defaultRange(prepared, part(0, rangeShare));
+      const found = defaultRange(prepared, { ...part(0, rangeShare), ...(options.current === undefined ? {} : { current: options.current }) });
       min ??= found.min;
       max ??= found.max;
       rule = defaultRangeRule;
@@ -85,17 +90,15 @@ export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: 
   }
   const rangeTime = now() - started;
   const figures = emptyFigures(radii);
-  sweepCovers(
-    prepared,
-    radii,
-    params.landmarks,
-    params.seed,
-    (k, cover, balls) => {
+  sweepCovers(prepared, radii, {
+    ...part(rangeShare, 1 - rangeShare),
+    rule: params.landmarks,
+    seed: params.seed,
+    visit: (k, cover, balls) => {
       setFigures(figures, k, coverFigures(cover, balls.rowNodes));
       onCover?.(k, cover, balls);
     },
-    part(rangeShare, 1 - rangeShare),
-  );
+  });
   return {
     params: { ...params, features: [...params.features] },
     rowsRead,
@@ -103,8 +106,8 @@ export function sweepPrepared(prepared: PreparedRows, rowsRead: number, params: 
     range: { min: radii[0]!, max: radii[radii.length - 1]!, rule },
     figures,
     plateaus: plateaus(radii, figures.b0, figures.b1),
-    suggestion: suggestStart(radii, figures),
-    suggestionRule,
+    suggestion: plateauMiddle(radii, figures),
+    suggestionRule: plateauMiddleRule,
     timings: { prepare: prepareTime, range: rangeTime, covers: now() - started - rangeTime },
   };
 }

@@ -1,8 +1,8 @@
-import { Cancelled } from "../cancel.ts";
+import { Cancelled } from "../control.ts";
 import { decodeWindows1252 } from "../encoding/decodeWindows1252.ts";
 import { detectEncoding, encodingProbeBytes, type TextEncodingName } from "../encoding/detectEncoding.ts";
-import { isParquet } from "../parquet/isParquet.ts";
-import { readParquet } from "../parquet/readParquet.ts";
+import { isParquet } from "./parquet/isParquet.ts";
+import { readParquet } from "./parquet/readParquet.ts";
 import { checkInputSize } from "./checkInputSize.ts";
 import { createTableReader } from "./createTableReader.ts";
 import type { ReadOptions } from "./readOptions.ts";

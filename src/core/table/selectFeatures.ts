@@ -1,4 +1,4 @@
-import type { MissingPolicy } from "../cover/params.ts";
+import type { MissingPolicy } from "../params.ts";
 import { mean } from "../stats/mean.ts";
 import { quantileSorted } from "../stats/quantileSorted.ts";
 import type { NumericTable, ParsedTable, TableColumn } from "./types.ts";

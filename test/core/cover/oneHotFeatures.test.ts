@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildCover, prepareFeatures, euclidean, readTableText } from "../../../src/core/index.ts";
+import { buildCover, prepareFeatures, readTableText } from "../../../src/core/index.ts";
 
 // Categorical columns as features through one-hot indicators (issue: data in). Values worked by hand.
 const text = ["x,site", "0,a", "0,b", "0,a", "10,b", "10,,", "10,a"].join("\n").replace(",,", ",") + "\n";
@@ -8,7 +8,7 @@ describe("one-hot features", () => {
   const { table } = readTableText(text);
 
   it("indicators follow the scaled numeric features, worth the column's weight, never scaled", () => {
-    const prepared = prepareFeatures(table, { features: ["x"], scale: "none", oneHot: ["site"], weights: { site: 2 } }, euclidean, "drop");
+    const prepared = prepareFeatures(table, { features: ["x"], scale: "none", oneHot: ["site"], weights: { site: 2 }, metric: "euclidean", missing: "drop" });
     expect(prepared.table.names).toEqual(["x", "site=a", "site=b"]);
     // row 5 (0-based 4) has no site: dropped under "drop" (worked by hand)
     expect(Array.from(prepared.droppedRows)).toEqual([4]);
@@ -16,7 +16,7 @@ describe("one-hot features", () => {
   });
 
   it("under imputation a missing level gives all-zero indicators and is counted as filled", () => {
-    const prepared = prepareFeatures(table, { features: ["x"], scale: "none", oneHot: ["site"] }, euclidean, "median");
+    const prepared = prepareFeatures(table, { features: ["x"], scale: "none", oneHot: ["site"], metric: "euclidean", missing: "median" });
     expect(prepared.usedRows.length).toBe(6);
     expect(Array.from(prepared.table.values.subarray(4 * 3, 5 * 3))).toEqual([10, 0, 0]); // worked by hand
     expect(prepared.imputed.site).toBe(1);

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildCover } from "../../../src/core/cover/buildCover.ts";
-import { suggestRadius } from "../../../src/core/cover/suggestRadius.ts";
+import { defaultRadius } from "../../../src/core/radius/defaultRadius.ts";
 import {
   generatePumpFleet, pumpDistricts, pumpFamilies, pumpFleetColumns, pumpFleetFeatures,
 } from "../../../src/core/demo/pumpFleet.ts";
@@ -81,7 +81,7 @@ describe("the demo table", () => {
 
 describe("the demo graph at the default radius (z-scores, Euclidean, greedy landmarks, seed 1)", () => {
   const params = { features: pumpFleetFeatures, scale: "zscore", metric: "euclidean" } as const;
-  const radius = suggestRadius(parsed, params);
+  const radius = defaultRadius(parsed, params);
   const cover = buildCover(parsed, { ...params, radius, landmarks: "greedy-file-order", seed: 1 });
   const nodes = cover.landmarks.length;
   const edges = cover.edges.source.length;

@@ -3,7 +3,7 @@
 // removed first, as a build does. "Within" is always the metric's reference predicate.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { chooseLandmarks, metrics, randomSource, shuffledOrder, type LandmarkRule, type Metric, type NumericTable } from "../../../src/core/index.ts";
+import { createRowIndex, landmarkBalls, metrics, randomSource, shuffledOrder, type LandmarkRule, type Metric, type NumericTable } from "../../../src/core/index.ts";
 import { bruteGreedyNet } from "../support/bruteForce.ts";
 import { definedRows, radiusFor } from "../support/definedTable.ts";
 import { gridTable } from "../support/gridTable.ts";
@@ -45,7 +45,7 @@ for (const metric of Object.values(metrics) as Metric[]) {
       fc.assert(
         fc.property(cases, ({ table, radius, rule, seed: s }) => {
           const { values, columns: d } = table;
-          const landmarks = Array.from(chooseLandmarks(table, metric, radius, rule, s));
+          const landmarks = Array.from(landmarkBalls(createRowIndex(table, metric), radius, rule, s).landmarks);
           const within = (a: number, b: number): boolean => metric.within(values, d, a, b, radius);
           const uncovered = rows(table.rows).filter((i) => !landmarks.some((l) => within(l, i)));
           const closePairs = landmarks.flatMap((a, k) => landmarks.slice(k + 1).filter((b) => within(a, b) || within(b, a)).map((b) => [a, b]));
@@ -60,7 +60,7 @@ for (const metric of Object.values(metrics) as Metric[]) {
     it("the same seed gives identical landmarks for every rule", () => {
       fc.assert(
         fc.property(cases, ({ table, radius, rule, seed: s }) => {
-          expect(Array.from(chooseLandmarks(table, metric, radius, rule, s))).toEqual(Array.from(chooseLandmarks(table, metric, radius, rule, s)));
+          expect(Array.from(landmarkBalls(createRowIndex(table, metric), radius, rule, s).landmarks)).toEqual(Array.from(landmarkBalls(createRowIndex(table, metric), radius, rule, s).landmarks));
         }),
       );
     });
@@ -71,7 +71,7 @@ for (const metric of Object.values(metrics) as Metric[]) {
           fc.pre(rule !== "maximin");
           const order = rule === "greedy-shuffled" ? shuffledOrder(table.rows, randomSource(s)) : rows(table.rows);
           const expected = bruteGreedyNet(order, (l, i) => metric.within(table.values, table.columns, l, i, radius));
-          expect(Array.from(chooseLandmarks(table, metric, radius, rule, s))).toEqual(expected);
+          expect(Array.from(landmarkBalls(createRowIndex(table, metric), radius, rule, s).landmarks)).toEqual(expected);
         }),
       );
     });
@@ -81,7 +81,7 @@ for (const metric of Object.values(metrics) as Metric[]) {
         fc.property(cases, ({ table, radius, seed: s }) => {
           fc.pre(table.rows > 0);
           const start = Math.floor(randomSource(s)() * table.rows);
-          const landmarks = Array.from(chooseLandmarks(table, metric, radius, "maximin", s));
+          const landmarks = Array.from(landmarkBalls(createRowIndex(table, metric), radius, "maximin", s).landmarks);
           expect(landmarks[0]).toBe(start);
           expect(landmarks).toEqual(bruteMaximin(table, metric, radius, start));
         }),

@@ -19,7 +19,7 @@ function normValue(norm: Norm, values: Float64Array, d: number, i: number, j: nu
 
 describe("boxBound", () => {
   it("the JSDoc example: centre (0, 0) and the box [1, 2]² give Σ gaps² = 2", () => {
-    expect(boxBound("squares", Float64Array.of(1, 1), Float64Array.of(2, 2), 0, Float64Array.of(0, 0), 0, 2, Infinity)).toBe(2); // worked by hand: 1² + 1²
+    expect(boxBound({ norm: "squares", dims: 2, coords: new Float64Array(0), lo: Float64Array.of(1, 1), hi: Float64Array.of(2, 2), centre: Float64Array.of(0, 0), centreBase: 0, limit: Infinity }, 0)).toBe(2); // worked by hand: 1² + 1²
   });
 
   it("never exceeds the value the reference computes between the centre and a row inside the box, for all three norms", () => {
@@ -36,7 +36,7 @@ describe("boxBound", () => {
             hi[k] = Math.max(hi[k]!, values[i * d + k]!);
           }
         }
-        const bound = boxBound(norm, lo, hi, 0, values, centre * d, d, Infinity);
+        const bound = boxBound({ norm, dims: d, coords: values, lo, hi, centre: values, centreBase: centre * d, limit: Infinity }, 0);
         for (let i = from; i < n; ++i) expect(bound).toBeLessThanOrEqual(normValue(norm, values, d, centre, i));
       }),
       { numRuns: 300 },

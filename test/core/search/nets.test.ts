@@ -1,9 +1,10 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { ballMembership, euclidean, greedyNet, maximinNet, randomSource, shuffledOrder } from "../../../src/core/index.ts";
-import { firstHitNet } from "../../../src/core/search/firstHitNet.ts";
-import { greedyBalls } from "../../../src/core/search/greedyBalls.ts";
-import { maximinBalls } from "../../../src/core/search/maximinBalls.ts";
+import { ballMembership, euclidean, randomSource, shuffledOrder } from "../../../src/core/index.ts";
+import { greedyNet, maximinNet } from "../support/nets.ts";
+import { firstHitNet } from "../../../src/core/landmark/firstHitNet.ts";
+import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
+import { maximinBalls } from "../../../src/core/landmark/maximinBalls.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { plainBall, plainGreedy, plainMaximin } from "./support/plainSearch.ts";
 import { searchCase } from "./support/searchTables.ts";
@@ -19,7 +20,7 @@ describe("greedy nets with a candidate index", () => {
       fc.property(searchCase, seedOrNull, ({ table, metric, radius, leafSize }, seed) => {
         const order = orderOf(table.rows, seed);
         const index = createRowIndex(table, metric, { leafSize });
-        expect(Array.from(greedyNet(table, metric, radius, order, undefined, { index }))).toEqual(plainGreedy(table, metric, radius, order));
+        expect(Array.from(greedyNet(table, metric, radius, order, { index }))).toEqual(plainGreedy(table, metric, radius, order));
         expect(Array.from(greedyNet(table, metric, radius, order))).toEqual(plainGreedy(table, metric, radius, order));
       }),
       { numRuns: 300 },
@@ -70,7 +71,7 @@ describe("farthest-point nets with a candidate index", () => {
       fc.property(searchCase, fc.nat(), ({ table, metric, radius, leafSize }, pick) => {
         const start = pick % table.rows;
         const index = createRowIndex(table, metric, { leafSize });
-        expect(Array.from(maximinNet(table, metric, radius, start, undefined, { index }))).toEqual(plainMaximin(table, metric, radius, start));
+        expect(Array.from(maximinNet(table, metric, radius, start, { index }))).toEqual(plainMaximin(table, metric, radius, start));
       }),
       { numRuns: 300 },
     );
@@ -94,7 +95,7 @@ describe("balls of given landmarks", () => {
         const index = createRowIndex(table, metric, { leafSize });
         Object.assign(index, { mode, modeRadius: radius });
         const expected = Array.from(landmarks, (l) => plainBall(table, metric, l, radius));
-        expect(lists(ballMembership(table, metric, radius, landmarks, undefined, { index }))).toEqual(expected);
+        expect(lists(ballMembership(table, metric, radius, landmarks, { index }))).toEqual(expected);
       }),
       { numRuns: 200 },
     );
@@ -102,8 +103,8 @@ describe("balls of given landmarks", () => {
 
   it("reports progress after every 64 landmarks, as before the index (150 landmarks: after 64 and 128)", () => {
     const table = { rows: 10, columns: 1, names: ["x"], values: Float64Array.from({ length: 10 }, (_, i) => i) };
-    const reports: [number, number][] = [];
-    ballMembership(table, euclidean, 1, new Uint32Array(150), (done, total) => reports.push([done, total]));
-    expect(reports).toEqual([[64, 150], [128, 150]]);
+    const reports: number[] = [];
+    ballMembership(table, euclidean, 1, new Uint32Array(150), { onProgress: (fraction) => reports.push(fraction) });
+    expect(reports).toEqual([64 / 150, 128 / 150]); // worked by hand: after k = 63 and k = 127
   });
 });

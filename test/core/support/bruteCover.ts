@@ -1,5 +1,6 @@
 import type { LandmarkRule, MetricName, ScaleName } from "../../../src/core/index.ts";
-import { bfsComponents, bruteBalls, bruteEdges, bruteGreedyNet } from "./bruteForce.ts";
+import { bfsComponents, bruteBalls, bruteEdges, bruteGreedyNet, bruteMaximinNet } from "./bruteForce.ts";
+import { independentNerve } from "./gf2Betti.ts";
 
 /**
  * A whole cover build by the definitions, on plain arrays of rows, for the open-dataset tests.
@@ -75,50 +76,11 @@ export function tieMargin(points: Rows, distance: Distance, radius: number): num
   return margin;
 }
 
-/** Farthest-point net by the definition: from `start`, add the uncovered row farthest from its nearest landmark (ties to the lowest row). */
-export function bruteMaximinNet(points: Rows, distance: Distance, radius: number, start: number): number[] {
-  const landmarks = [start];
-  for (;;) {
-    let next = -1;
-    let farthest = -Infinity;
-    points.forEach((p, i) => {
-      const nearest = Math.min(...landmarks.map((l) => distance(points[l]!, p)));
-      if (nearest > radius && nearest > farthest) {
-        farthest = nearest;
-        next = i;
-      }
-    });
-    if (next < 0) return landmarks;
-    landmarks.push(next);
-  }
-}
 
-/** b0, b1 over GF(2) of the nerve's 2-skeleton: triangles are ball triples sharing a row; rank ∂2 by Gaussian elimination on bit sets. */
-export function bruteBetti(balls: readonly (readonly number[])[], edges: { source: number[]; target: number[] }, b0: number) {
-  const edgeIndex = new Map<string, number>(edges.source.map((a, e) => [`${a},${edges.target[e]!}`, e]));
-  const sets = balls.map((ball) => new Set(ball));
-  const pivots = new Map<number, bigint>();
-  let triangles = 0;
-  for (let a = 0; a < balls.length; ++a) {
-    for (let b = a + 1; b < balls.length; ++b) {
-      for (let c = b + 1; c < balls.length; ++c) {
-        if (!balls[a]!.some((row) => sets[b]!.has(row) && sets[c]!.has(row))) continue;
-        triangles++;
-        let column = [`${a},${b}`, `${a},${c}`, `${b},${c}`].reduce((bits, key) => bits | (1n << BigInt(edgeIndex.get(key)!)), 0n);
-        while (column !== 0n) {
-          const top = column.toString(2).length - 1;
-          const other = pivots.get(top);
-          if (other === undefined) {
-            pivots.set(top, column);
-            break;
-          }
-          column ^= other;
-        }
-      }
-    }
-  }
-  const rank = pivots.size;
-  return { b0, b1: edges.source.length - balls.length + b0 - rank, triangles, boundaryRank: rank };
+/** b0, b1 over GF(2) of the nerve's 2-skeleton, with the triangle count and rank ∂2: the tests' one nerve reference (gf2Betti.ts). */
+function bruteBetti(balls: readonly (readonly number[])[]) {
+  const nerve = independentNerve(balls);
+  return { b0: nerve.b0, b1: nerve.b1, triangles: nerve.triangles.length, boundaryRank: nerve.boundaryRank };
 }
 
 export interface BruteCoverOptions {
@@ -129,6 +91,12 @@ export interface BruteCoverOptions {
   readonly order?: readonly number[];
   /** Starting row (maximin) as an index into the defined rows. */
   readonly start?: number;
+  /** Replaces the test d(a, b) ≤ r (rows a, b of `points`), e.g. by the metric's reference predicate. */
+  readonly within?: (a: number, b: number) => boolean;
+  /** Replaces the textbook distance between rows a, b of `points` (maximin ranks by it). */
+  readonly distance?: (a: number, b: number) => number;
+  /** Compute the nerve's b0/b1 (default true; O(L³) triples). */
+  readonly loops?: boolean;
 }
 
 /**
@@ -139,10 +107,12 @@ export function bruteCover(points: Rows, options: BruteCoverOptions) {
   const distance = bruteDistances[options.metric];
   const defined = points.map((_, i) => i).filter((i) => !isUndefinedRow(options.metric, points[i]!));
   const local = defined.map((i) => points[i]!);
-  const covers = (l: number, i: number): boolean => distance(local[l]!, local[i]!) <= options.radius;
+  const { within, distance: between } = options;
+  const apart = (l: number, i: number): number => (between ? between(defined[l]!, defined[i]!) : distance(local[l]!, local[i]!));
+  const covers = (l: number, i: number): boolean => (within ? within(defined[l]!, defined[i]!) : apart(l, i) <= options.radius);
   const net =
     options.landmarks === "maximin"
-      ? bruteMaximinNet(local, distance, options.radius, options.start ?? 0)
+      ? bruteMaximinNet(local.length, options.start ?? 0, covers, apart)
       : bruteGreedyNet(options.order ?? local.map((_, i) => i), covers);
   const balls = bruteBalls(local.length, net, covers);
   const edges = bruteEdges(balls);
@@ -156,6 +126,6 @@ export function bruteCover(points: Rows, options: BruteCoverOptions) {
     component: components.component,
     componentCount: components.count,
     cycleRank: edges.source.length - net.length + components.count,
-    betti: bruteBetti(balls, edges, components.count),
+    betti: options.loops === false ? null : bruteBetti(balls),
   };
 }

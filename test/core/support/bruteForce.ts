@@ -36,6 +36,33 @@ export function bruteGreedyNet(order: ArrayLike<number>, covers: (landmark: numb
   return kept;
 }
 
+/**
+ * Farthest-point net by the definition, on row numbers: from `start`, add the row covered by no
+ * landmark (`covers`) whose nearest landmark (`distance`) is farthest, ties to the lowest row;
+ * stop when every row is covered.
+ */
+export function bruteMaximinNet(rows: number, start: number, covers: (landmark: number, row: number) => boolean, distance: (landmark: number, row: number) => number): number[] {
+  const nearest = new Float64Array(rows).fill(Infinity);
+  const covered = new Uint8Array(rows);
+  const landmarks: number[] = [];
+  for (let next = start; next >= 0; ) {
+    landmarks.push(next);
+    for (let i = 0; i < rows; ++i) {
+      if (covered[i]) continue;
+      if (covers(next, i)) covered[i] = 1;
+      else nearest[i] = Math.min(nearest[i]!, distance(next, i));
+    }
+    next = -1;
+    let farthest = -Infinity;
+    for (let i = 0; i < rows; ++i) {
+      if (covered[i] || !(nearest[i]! > farthest)) continue;
+      farthest = nearest[i]!;
+      next = i;
+    }
+  }
+  return landmarks;
+}
+
 /** Closed balls: for each landmark, every row (ascending) within r of it. */
 export function bruteBalls(rows: number, landmarks: readonly number[], covers: (landmark: number, row: number) => boolean): number[][] {
   return landmarks.map((landmark) => Array.from({ length: rows }, (_, i) => i).filter((i) => covers(landmark, i)));

@@ -3,8 +3,8 @@ import { describe, expect, it } from "vitest";
 import { assertClose } from "../../assertClose.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { euclidean, parseCsvText } from "../../../src/core/index.ts";
-import { cappedGreedyCount } from "../../../src/core/sweep/cappedGreedyCount.ts";
-import { spanningForest } from "../../../src/core/sweep/spanningForest.ts";
+import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
+import { spanningForest } from "../../../src/core/nerve/spanningForest.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
 import { pointsTable } from "./support.ts";
 
@@ -38,9 +38,10 @@ describe("small pieces", () => {
     expect(Array.from(spanningForest(3, edges))).toEqual([1, 1, 0]); // worked by hand: breadth first from node 0
   });
 
-  it("capped greedy count on the line 0, 1, 2, 3 at r = 1 is 2 (landmarks 0, 2), and cap + 1 = 2 when the cap is 1", () => {
+  it("a greedy net capped at maxLandmarks on the line 0, 1, 2, 3 at r = 1 has 2 landmarks (0, 2), and cap + 1 = 2 when the cap is 1", () => {
     const table = { rows: 4, columns: 1, names: ["x"], values: Float64Array.of(0, 1, 2, 3) };
-    expect(cappedGreedyCount(createRowIndex(table, euclidean), 1, 5)).toBe(2); // worked by hand, greedyNet's example
-    expect(cappedGreedyCount(createRowIndex(table, euclidean), 1, 1)).toBe(2); // the second landmark exceeds the cap
+    const order = Uint32Array.of(0, 1, 2, 3);
+    expect(greedyBalls(createRowIndex(table, euclidean), 1, order, { balls: false, maxLandmarks: 5 }).landmarks.length).toBe(2); // worked by hand, greedyNet's example
+    expect(greedyBalls(createRowIndex(table, euclidean), 1, order, { balls: false, maxLandmarks: 1 }).landmarks.length).toBe(2); // worked by hand: the second landmark exceeds the cap
   });
 });

@@ -4,7 +4,7 @@
 // radius lists, every landmark rule and seed, and every metric, cosine and correlation included.
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { buildCover, metricNames, parseCsvText, type CoverResult, type MetricName } from "../../../src/core/index.ts";
+import { buildCover, metricNames, parseCsvText, randomSource, type CoverResult, type MetricName } from "../../../src/core/index.ts";
 import type { SweepCover } from "../../../src/core/sweep/coverFromBalls.ts";
 import { lists, sweepWithCovers } from "./support.ts";
 
@@ -87,6 +87,25 @@ describe("a sweep equals separate buildCover builds at its radii", () => {
         });
       }),
       { numRuns: 60 },
+    );
+  });
+
+  it("on tables of 2,000 to 4,000 rows the sweep's covers equal separate builds at every radius, for every rule", () => {
+    // clustered rows in 3 columns on a grid of quarters (ties d = r common), seeded; 3 radii per table
+    fc.assert(
+      fc.property(fc.integer({ min: 2000, max: 4000 }), fc.integer({ min: 1, max: 1e6 }), settings, (rows, dataSeed, s) => {
+        const random = randomSource(dataSeed);
+        const records = Array.from({ length: rows }, () => {
+          const cluster = Math.floor(random() * 4);
+          return [0, 1, 2].map((j) => String(Math.round(4 * (cluster * (j === cluster % 3 ? 3 : 0) + 2 * (random() - 0.5))) / 4)).join(",");
+        });
+        const parsed = parseCsvText(`a,b,c\n${records.join("\n")}\n`);
+        const params = { features: ["a", "b", "c"], ...s, metric: s.metric === "correlation" ? ("euclidean" as const) : s.metric };
+        const list = params.metric === "cosine" ? [0.02, 0.05, 0.1] : [0.25, 0.5, 1];
+        const { covers } = sweepWithCovers(parsed, params, { radii: list });
+        list.forEach((radius, k) => expect(graphOf(covers[k]!)).toEqual(graphOf(buildCover(parsed, { ...params, radius }))));
+      }),
+      { numRuns: 6 },
     );
   });
 });

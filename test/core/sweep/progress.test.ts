@@ -48,12 +48,12 @@ describe("cancellation while the index is built", () => {
     // scale "none": the build asks once before the tree (after preparing the rows) and then inside it
     let asks = 0;
     let phase = "";
-    const build = (): unknown => buildCover(big, { ...params, radius: 3 }, { onProgress: (p) => (phase = p), shouldStop: () => ++asks > 1 });
+    const build = (): unknown => buildCover(big, { ...params, radius: 3 }, { onPhase: (p) => (phase = p), shouldStop: () => ++asks > 1 });
     expect(build).toThrow("the build was cancelled");
     expect([asks, phase]).toEqual([2, "landmarks"]);
     // z-scoring asks between its two columns, before the tree
     asks = 0;
-    const scaled = (): unknown => buildCover(big, { ...params, scale: "zscore", radius: 3 }, { onProgress: (p) => (phase = p), shouldStop: () => ++asks > 1 });
+    const scaled = (): unknown => buildCover(big, { ...params, scale: "zscore", radius: 3 }, { onPhase: (p) => (phase = p), shouldStop: () => ++asks > 1 });
     expect(scaled).toThrow("the build was cancelled");
     expect([asks, phase]).toEqual([2, "scale"]);
     let asked = 0;

@@ -1,7 +1,7 @@
 import type { CompressedLists, ParsedTable } from "../../../src/core/index.ts";
 import type { SweepCover } from "../../../src/core/sweep/coverFromBalls.ts";
 import { radiusSweep, type RadiusSweep, type SweepOptions } from "../../../src/core/sweep/radiusSweep.ts";
-import type { SweepParams } from "../../../src/core/sweep/prepareRows.ts";
+import type { SweepParams } from "../../../src/core/search/prepareRows.ts";
 
 /** A parsed table straight from rows of numbers (NaN marks a missing cell); every column numeric. */
 export function pointsTable(names: readonly string[], rows: readonly (readonly number[])[]): ParsedTable {

@@ -1,4 +1,4 @@
-import { appendList, closeLists, reserveLists, type ListBuilder } from "../../../../src/core/search/listBuilder.ts";
+import { appendList, closeLists, reserveLists, type ListBuilder } from "../../../../src/core/lists/listBuilder.ts";
 
 /** Writes one group of lists into `builder` through reserved room (reserveLists, closeLists), and appends each to `reference` one by one. */
 export function writeGroup(builder: ListBuilder, reference: ListBuilder, lists: readonly ArrayLike<number>[]): void {
