@@ -62,7 +62,11 @@ export function sharedRowCount(a: Uint32Array, b: Uint32Array): number {
   while (i < a.length && j < b.length) {
     if (a[i]! < b[j]!) ++i;
     else if (a[i]! > b[j]!) ++j;
-    else (++shared, ++i, ++j);
+    else {
+      ++shared;
+      ++i;
+      ++j;
+    }
   }
   return shared;
 }

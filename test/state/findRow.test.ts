@@ -5,7 +5,7 @@ import { findRow, rowOfQuery } from "../../src/state/findRow.ts";
 // Records 1–6: record 3 has a missing y (dropped); under cosine, record 5 = (0, 0) has no direction (undefined).
 const csv = "name,x,y\nalpha,1,0\nbeta,1,0.1\ngamma,1,\ndelta,0,1\nepsilon,0,0\nzeta,0.1,1\n";
 const table = readTableText(csv).table;
-const result = buildCover(table, { features: ["x", "y"], scale: "none", metric: "cosine", radius: 0.01, landmarks: "greedy", seed: 1, missing: "drop" });
+const result = buildCover(table, { features: ["x", "y"], scale: "none", metric: "cosine", radius: 0.01, landmarks: "greedy-file-order", seed: 1, missing: "drop" });
 
 describe("rowOfQuery", () => {
   it("record number 4 is row 3 (1-based outside, 0-based inside)", () => {
