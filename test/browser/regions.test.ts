@@ -110,6 +110,10 @@ it("demo: finding record 1 marks the nodes holding it and centres the view on th
   expect(Math.abs(cy - box.height / 2)).toBeLessThan(0.5);
   const offset = await probe(page, (g) => g.offset());
   expect(await page.getByTestId("graph-canvas").getAttribute("data-offset")).toBe(`${offset.x},${offset.y}`);
+  expect(offset).not.toEqual({ x: 0, y: 0 });
   await saveScreenshot(page, "regions-find-row");
+  await page.getByRole("searchbox", { name: "row to find" }).fill("");
+  await page.getByRole("button", { name: "Find" }).click();
+  await expect(probe(page, (g) => g.offset())).resolves.toEqual({ x: 0, y: 0 }); // the search ended: back to the fitted view
   expect(errors).toEqual([]);
 });

@@ -29,7 +29,7 @@ export function ForceGraph() {
   const canvas = useRef<HTMLCanvasElement>(null);
   const view = useRef<View | null>(null);
   const marked = useRef<Layout | null>(null);
-  // added to the fitted view by "find a row"; back to zero with every new layout (the next fit)
+  // added to the fitted view by "find a row"; back to zero with every new layout (the next fit) and when the search ends
   const offset = useRef({ x: 0, y: 0 });
   const share = shareValues ? { values: shareValues, style: activeStyle } : null;
   const paint = useRef({ selected, fillOf: fillColors(fill), region, outlines, share, found });
@@ -75,7 +75,15 @@ export function ForceGraph() {
   useEffect(() => {
     const current = layout.current;
     const element = canvas.current;
-    if (!current || !element || found.length === 0) return;
+    if (!current || !element) return;
+    if (found.length === 0) {
+      // the search ended (or found nothing): back to the fitted view
+      if (offset.current.x !== 0 || offset.current.y !== 0) {
+        offset.current = { x: 0, y: 0 };
+        draw(current);
+      }
+      return;
+    }
     const fit = fitTransform(current, element.clientWidth, element.clientHeight);
     const nodes = found.map((k) => current.nodes[k]!).filter(Boolean);
     const cx = nodes.reduce((sum, n) => sum + n.x, 0) / nodes.length;
