@@ -22,6 +22,7 @@ export type { ReadOutcome, TableReport, ColumnReport, FlaggedCell, Notice, Table
 export { checkInputSize } from "./table/checkInputSize.ts";
 export { oneHot } from "./table/oneHot.ts";
 export { categoryCounts, majorityLevel } from "./table/categoryCounts.ts";
+export { cellText } from "./table/cellText.ts";
 export { detectEncoding, maybeEncoding, encodingProbeBytes, type TextEncodingName } from "./encoding/detectEncoding.ts";
 export { decodeWindows1252 } from "./encoding/decodeWindows1252.ts";
 export { readParquet } from "./table/parquet/readParquet.ts";

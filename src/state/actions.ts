@@ -3,6 +3,8 @@ import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
 import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
+import { createRegionActions } from "./regionActions.ts";
+import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
@@ -69,6 +71,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     const colour = colorBy ?? table.columns.find((c) => roles[c.name] === "outcome" && c.kind === "numeric")?.name ?? null;
     set({
       source, table, report: answer.report, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, selection: [],
+      regions: [], activeRegionId: null, rowQuery: null, // regions name rows of the table they were kept on
       radius: NaN, suggestedRadius: NaN, sweep: null, region: null, seedRuns: null,
       stage: answer.report.notices.length > 0 && !source.isDemo ? "report" : "graph",
     });
@@ -153,6 +156,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     load({ tableSource: { kind: "text", text }, source, hints, colorBy }, {});
 
   return {
+    ...createRegionActions(store),
     loadText,
     suggestRadius,
     /** Reads the last table again with other reading options (delimiter, decimal mark, encoding, ragged rows). */
@@ -253,7 +257,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       set({ sweepMin, sweepMax, sweepSteps });
     },
     setSeedCount: (seedCount: number): void => set({ seedCount }),
-    /** Radius sweep over the current recipe (without its radius); tracks the region when one is selected. */
+    /** Radius sweep over the current recipe (without its radius); tracks the active region, else the selection's rows. */
     async runSweep(): Promise<void> {
       const s = store.getState();
       const params = selectCoverParams({ ...s, radius: s.radius > 0 ? s.radius : 1 });
@@ -263,7 +267,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       endRunningBuild();
       set({ stability: { state: "running", task: "sweep", fraction: 0, error: null } });
       const range = { steps: s.sweepSteps, ...(s.sweepMin === null ? {} : { radiusMin: s.sweepMin }), ...(s.sweepMax === null ? {} : { radiusMax: s.sweepMax }), ...(s.radius > 0 ? { current: s.radius } : {}) };
-      const answer = await env.client.send({ type: "sweep", params: sweepParams, range, selection: selectRegionRows(s) }, (progress) => {
+      const answer = await env.client.send({ type: "sweep", params: sweepParams, range, selection: selectTrackedRows(s) }, (progress) => {
         if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
       });
       if (ticket !== latestBuild || answer.type === "cancelled") return;
@@ -278,7 +282,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const ticket = ++latestBuild;
       endRunningBuild();
       set({ stability: { state: "running", task: "seeds", fraction: 0, error: null } });
-      const answer = await env.client.send({ type: "seeds", params, seeds: s.seedCount, selection: selectRegionRows(s) }, (progress) => {
+      const answer = await env.client.send({ type: "seeds", params, seeds: s.seedCount, selection: selectTrackedRows(s) }, (progress) => {
         if (ticket === latestBuild) set({ stability: { ...store.getState().stability, fraction: progress.fraction } });
       });
       if (ticket !== latestBuild || answer.type === "cancelled") return;

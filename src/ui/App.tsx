@@ -7,7 +7,10 @@ import { BuildSummary } from "./panels/BuildSummary.tsx";
 import { Cautions } from "./panels/Cautions.tsx";
 import { ColumnRoles } from "./panels/ColumnRoles.tsx";
 import { CoverControls } from "./panels/CoverControls.tsx";
+import { FindRow } from "./panels/FindRow.tsx";
 import { InspectorTabs } from "./panels/InspectorTabs.tsx";
+import { RegionList } from "./panels/RegionList.tsx";
+import { SelectionBar } from "./panels/SelectionBar.tsx";
 import { SourceBar } from "./panels/SourceBar.tsx";
 import { TableReport } from "./panels/TableReport.tsx";
 import { useWorkbench } from "./useWorkbench.ts";
@@ -31,6 +34,11 @@ export function App({ openDemo = true }: { openDemo?: boolean }) {
           <TableReport />
         ) : (
           <>
+            <div className="region-tools">
+              <SelectionBar />
+              <FindRow />
+              <RegionList />
+            </div>
             <ColorLegend />
             <ForceGraph />
           </>

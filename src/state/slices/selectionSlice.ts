@@ -10,6 +10,12 @@ export interface NamedRegion {
   readonly rows: Uint32Array;
 }
 
+/** The last "find a row" query; the nodes holding the row are derived from the current build. */
+export interface RowQuery {
+  readonly query: string;
+  readonly mode: "label" | "record";
+}
+
 export interface SelectionSlice {
   /** 0-based node index of the node open in the side pane; shown to people as node + 1. */
   readonly selectedNode: number | null;
@@ -19,8 +25,10 @@ export interface SelectionSlice {
   readonly regions: readonly NamedRegion[];
   /** The region that shading, the sweep and the seed runs follow; null for none. */
   readonly activeRegionId: number | null;
+  /** The row being looked for, or null; it outlives a rebuild (the nodes holding it are looked up again). */
+  readonly rowQuery: RowQuery | null;
   /** What the middle of the screen shows: the graph or the table report. */
   readonly stage: "graph" | "report";
 }
 
-export const initialSelection: SelectionSlice = { selectedNode: null, selection: [], regions: [], activeRegionId: null, stage: "graph" };
+export const initialSelection: SelectionSlice = { selectedNode: null, selection: [], regions: [], activeRegionId: null, rowQuery: null, stage: "graph" };

@@ -1,11 +1,6 @@
+import { drawLasso, drawRegionMarks, type RegionMarks } from "./drawRegionMarks.ts";
 import type { Layout } from "./useForceLayout.ts";
-
-/** Screen = world · k + (x, y). */
-export interface View {
-  readonly k: number;
-  readonly x: number;
-  readonly y: number;
-}
+import type { View } from "./view.ts";
 
 /** Fits the layout's bounding box (with node radii) into the canvas with a margin; never zooms past 1.6×. */
 export function fitTransform(layout: Layout, width: number, height: number, margin = 16): View {
@@ -21,13 +16,13 @@ export function fitTransform(layout: Layout, width: number, height: number, marg
   return { k, x: width / 2 - k * (x0 + x1) / 2, y: height / 2 - k * (y0 + y1) / 2 };
 }
 
-export interface Paint {
+export interface Paint extends RegionMarks {
   readonly width: number;
   readonly height: number;
   /** Fill colour of node k. */
   readonly fillOf: (node: number) => string;
   readonly selected: number | null;
-  /** Nodes of the selected region, outlined. */
+  /** Nodes of the selection, ringed. */
   readonly region: readonly number[];
 }
 
@@ -100,6 +95,7 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
     context.arc(node.x, node.y, node.radius, 0, 2 * Math.PI);
   }
   context.stroke();
+  drawRegionMarks(context, layout, view, paint);
   for (const k of paint.region) {
     const node = layout.nodes[k];
     if (node) doubleRing(context, node, view.k, regionRing);
@@ -107,6 +103,7 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
   const chosen = paint.selected === null ? undefined : layout.nodes[paint.selected];
   if (chosen) doubleRing(context, chosen, view.k, selectionRing);
   context.restore();
+  if (paint.lasso) drawLasso(context, paint.lasso);
 }
 
 /** The topmost node under a screen point, or null. */

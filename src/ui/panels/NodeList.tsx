@@ -5,7 +5,7 @@ import { formatNumber, plural } from "../format.ts";
 import { maxDrawnNodes } from "../graph/drawLimits.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 
-/** Keyboard route to every node: a native list box (arrow keys move, the choice opens the node). */
+/** Keyboard route to every node: a native list box (arrow keys move, the choice opens the node, shift+Enter adds it to the selection). */
 export function NodeList() {
   const latest = useWorkbench((s) => s.result);
   const selected = useWorkbench((s) => s.selectedNode);
@@ -47,6 +47,12 @@ export function NodeList() {
         aria-busy={stale}
         value={selected === null || stale ? "" : String(selected)}
         onChange={(e) => actions().selectNode(Number(e.currentTarget.value))}
+        onKeyDown={(e) => {
+          // shift+Enter adds the open node to the selection, or takes it out: the keyboard's lasso
+          if (e.key !== "Enter" || !e.shiftKey || e.currentTarget.value === "") return;
+          e.preventDefault();
+          actions().toggleNode(Number(e.currentTarget.value));
+        }}
       >
         <option value="" disabled>no node open</option>
         {Array.from(result.landmarks, (_, k) => (
