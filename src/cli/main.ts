@@ -3,12 +3,15 @@ import { buildUsage, parseBuildArgs } from "./parseBuildArgs.ts";
 import { runBuild } from "./runBuild.ts";
 import { parseSweepArgs, sweepUsage } from "./parseSweepArgs.ts";
 import { runSweep } from "./runSweep.ts";
+import { explainUsage, parseExplainArgs } from "./parseExplainArgs.ts";
+import { runExplain } from "./runExplain.ts";
 
-const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage };
-const topUsage = `shoal build DATA --out DIR [options]   one cover graph: nodes.csv, members.csv, edges.csv, summary.json
-shoal sweep DATA [--out FILE] [options] the graph's figures at many radii, one CSV line per radius
-shoal help [build | sweep]              the options of a command (also: shoal build --help)
-shoal --version                         the version`;
+const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage };
+const topUsage = `shoal build DATA --out DIR [options]     one cover graph: nodes.csv, members.csv, edges.csv, summary.json
+shoal sweep DATA [--out FILE] [options]   the graph's figures at many radii, one CSV line per radius
+shoal explain DATA --nodes 3,4 [options]  what sets the rows of some nodes apart, one CSV line per column
+shoal help [build | sweep | explain]      the options of a command (also: shoal build --help)
+shoal --version                           the version`;
 
 /** The version in package.json. */
 export function version(): string {
@@ -30,6 +33,9 @@ export async function main(args: readonly string[]): Promise<number> {
       case "sweep":
         process.stdout.write(await runSweep(parseSweepArgs(rest)));
         return 0;
+      case "explain":
+        process.stdout.write(await runExplain(parseExplainArgs(rest)));
+        return 0;
       case "--version":
       case "-v":
       case "version":
@@ -41,7 +47,7 @@ export async function main(args: readonly string[]): Promise<number> {
       case "-h": {
         const topic = command === "help" ? rest[0] : undefined;
         if (topic !== undefined && !(topic in usages)) throw new Error(`unknown command: ${topic}`);
-        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}` : usages[topic]);
+        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}` : usages[topic]);
         return command === undefined ? 2 : 0;
       }
       default:

@@ -1,4 +1,4 @@
-import { open } from "node:fs/promises";
+import { open, type FileHandle } from "node:fs/promises";
 import { basename } from "node:path";
 import {
   maybeDecimalMark,
@@ -7,7 +7,9 @@ import {
   maybeRaggedPolicy,
   readTableBytes,
   type ByteReadOptions,
+  type ByteSource,
   type ReadOutcome,
+  type Utf8Decoder,
 } from "../core/index.ts";
 
 export const readOptionSpec = {
@@ -40,30 +42,32 @@ export async function readInput(path: string, options: ByteReadOptions): Promise
   });
   try {
     const { size } = await handle.stat();
-    const outcome = await readTableBytes(
-      {
-        size,
-        read: async (start, end) => {
-          const buffer = new Uint8Array(end - start);
-          let done = 0;
-          while (done < buffer.length) {
-            const { bytesRead } = await handle.read(buffer, done, buffer.length - done, start + done);
-            if (bytesRead === 0) break;
-            done += bytesRead;
-          }
-          return buffer.subarray(0, done);
-        },
-      },
-      options,
-      {
-        utf8: () => {
-          const decoder = new TextDecoder("utf-8", { fatal: true });
-          return (bytes, last) => decoder.decode(bytes, { stream: !last });
-        },
-      },
-    );
+    const outcome = await readTableBytes(fileSource(handle, size), options, { utf8 });
     return { ...outcome, fileName: basename(path), fileSize: size };
   } finally {
     await handle.close();
   }
+}
+
+/** Node's streaming UTF-8 decoder for core's reader. */
+export function utf8(): Utf8Decoder {
+  const decoder = new TextDecoder("utf-8", { fatal: true });
+  return (bytes, last) => decoder.decode(bytes, { stream: !last });
+}
+
+/** An open file as core's ByteSource. */
+export function fileSource(handle: FileHandle, size: number): ByteSource {
+  return {
+    size,
+    read: async (start, end) => {
+      const buffer = new Uint8Array(end - start);
+      let done = 0;
+      while (done < buffer.length) {
+        const { bytesRead } = await handle.read(buffer, done, buffer.length - done, start + done);
+        if (bytesRead === 0) break;
+        done += bytesRead;
+      }
+      return buffer.subarray(0, done);
+    },
+  };
 }

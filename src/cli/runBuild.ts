@@ -1,43 +1,38 @@
-import { buildCover, coverExports, featureWeights, readingRecord, suggestRadius, type CoverParams } from "../core/index.ts";
-import { resolveFeatures } from "./commonOptions.ts";
+import { coverExports, regionRowsCsv } from "../core/index.ts";
+import { buildFromFile } from "./buildFromFile.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
-import { readInput } from "./readInput.ts";
+import { chosenRows } from "./regionArgs.ts";
+import { readRegionTexts } from "./readRegionTexts.ts";
 import { writeFileSet } from "./writeFileSet.ts";
 
 /**
  * Reads the table through the same core parser as the workbench, builds, and writes the same
- * nodes.csv, members.csv, edges.csv and summary.json. The four files replace the previous set of
- * Shoal's files in the folder as a whole (`writeFileSet`), so a failure leaves the old set complete.
+ * nodes.csv, members.csv, edges.csv and summary.json, and with --region-nodes region-rows.csv (the
+ * region's rows with their cells read again from the file). The files replace the previous set of
+ * Shoal's files in the folder as a whole (`writeFileSet`), so a failure leaves the old set complete
+ * and a run without a region removes an earlier region-rows.csv.
  */
 export async function runBuild(command: BuildCommand): Promise<string> {
-  const { table, report, fileName, fileSize } = await readInput(command.input, command.read);
-  const features = resolveFeatures(table, command);
-  for (const name of command.outcomes) {
-    if (table.columns.find((c) => c.name === name)!.kind !== "numeric") throw new Error(`not a numeric column: ${name}`);
-  }
-  const { scale, metric, landmarks, seed } = command.params;
-  const missing = command.params.missing ?? "drop";
-  const oneHot = command.params.oneHot ?? [];
-  const weights = featureWeights([...features, ...oneHot], command.params.weights ?? {});
-  const encoded = oneHot.length > 0 ? { oneHot } : {};
-  const radius = command.radius ?? suggestRadius(table, { features, scale, metric, missing, weights, ...encoded });
-  if (!(radius > 0)) throw new Error("no default radius: the rows do not differ in the chosen columns");
-  // the same key order as the workbench's parameters, so both summaries read alike
-  const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights, ...encoded };
-  const started = performance.now();
-  const result = buildCover(table, params, { now: () => performance.now() });
-  const elapsed = performance.now() - started;
-  const reading = readingRecord(report.format, command.read.ragged);
-  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading });
+  const { table, report, fileName, fileSize, radius, result, reading, elapsed } = await buildFromFile(command);
+  const regions = command.region ? [{ name: command.region.name, rows: chosenRows(command.region.choice, result) }] : [];
+  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading, regions });
   const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
+  const regionFiles: Record<string, string> = {};
+  if (regions.length > 0) {
+    const texts = await readRegionTexts(command.input, regions.flatMap((region) => Array.from(region.rows)), report.format, command.read);
+    const decimal = report.format.kind === "delimited" ? report.format.decimal : ".";
+    regionFiles["region-rows.csv"] = regionRowsCsv(regions, table.columns.map((c) => c.name), texts, decimal);
+  }
 
   await writeFileSet(command.outDir, {
     "nodes.csv": files["nodes.csv"],
     "members.csv": files["members.csv"],
     "edges.csv": files["edges.csv"],
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
+    ...regionFiles,
   });
   const loops = result.betti ? `, b0 ${result.betti.b0}, b1 ${result.betti.b1}` : "";
   const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? "" : "s"}`;
-  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")}, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}; wrote ${command.outDir}`;
+  const region = regions[0] ? `; region ${regions[0].name}: ${count(regions[0].rows.length, "row")}` : "";
+  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")}, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}${region}; wrote ${command.outDir}`;
 }

@@ -101,3 +101,16 @@ export { greedyBalls, type GreedyBallsOptions, type NetWithBalls } from "./searc
 export { maximinBalls, type MaximinBallsOptions } from "./search/maximinBalls.ts";
 export { blockMembership } from "./search/blockMembership.ts";
 export type { NetOptions } from "./landmark/greedyNet.ts";
+export { ksStatistic } from "./stats/ksStatistic.ts";
+export { ksPValue } from "./stats/ksPValue.ts";
+export { benjaminiHochberg } from "./stats/benjaminiHochberg.ts";
+export { cohensD } from "./stats/cohensD.ts";
+export { chiSquaredIndependence, type ChiSquaredIndependence } from "./stats/chiSquaredIndependence.ts";
+export { nodeRows } from "./regions/nodeRows.ts";
+export { regionSides, type RegionSides } from "./regions/regionSides.ts";
+export { compareNumeric, type NumericComparison } from "./regions/compareNumeric.ts";
+export { compareCategorical, type CategoricalComparison } from "./regions/compareCategorical.ts";
+export { regionTable, type RegionTable, type RegionTableLine, type RegionTableOptions } from "./regions/regionTable.ts";
+export { readRecordTexts, type RecordTextOptions } from "./table/readRecordTexts.ts";
+export { regionRowsCsv, type Region } from "./export/regionRowsCsv.ts";
+export { regionTableCsv, regionTableHeader } from "./export/regionTableCsv.ts";

@@ -4,6 +4,7 @@ import { cellText } from "../table/cellText.ts";
 import type { DecimalMark, DelimiterName, RaggedPolicy } from "../table/readOptions.ts";
 import type { ParsedTable } from "../table/types.ts";
 import { csvLine, csvNumber, csvQuoted, csvText } from "./csvCell.ts";
+import type { Region } from "./regionRowsCsv.ts";
 
 /**
  * Version of the export layout below; bump it when a file's columns or meaning change.
@@ -25,6 +26,8 @@ export interface ExportContext {
   readonly outcomes: readonly string[];
   /** How the file was read; written as `input.reading` in summary.json (null when absent). */
   readonly reading?: ReadingRecord;
+  /** Regions kept by name (0-based rows); listed as `regions` in summary.json (empty when absent). */
+  readonly regions?: readonly Region[];
 }
 
 export interface CoverExports {
@@ -92,6 +95,7 @@ export function coverExports(parsed: ParsedTable, result: CoverResult, context: 
     b0: result.betti?.b0 ?? null,
     b1: result.betti?.b1 ?? null,
     memberships: result.members.items.length,
+    regions: (context.regions ?? []).map((region) => ({ name: region.name, rowCount: region.rows.length, records: Array.from(region.rows, (r) => r + 1) })),
   };
   return {
     "nodes.csv": nodesCsv,
