@@ -1,6 +1,6 @@
 import { ecdfPath } from "./ecdfPath.ts";
 
-const width = 96;
+const width = 84;
 const height = 28;
 export const insideStroke = "#0072B2"; // Okabe–Ito blue (M. Okabe and K. Ito, 2008): the region, solid
 export const outsideStroke = "#5b6270"; // the page's muted ink: the other side, dashed, so the two differ without colour

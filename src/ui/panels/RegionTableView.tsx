@@ -3,7 +3,7 @@ import type { RegionTableLine } from "../../core/index.ts";
 import type { RegionCurve } from "../../worker/protocol.ts";
 import { formatCount, formatNumber } from "../format.ts";
 import { formatP } from "../formatP.ts";
-import { EcdfPlot } from "./EcdfPlot.tsx";
+import { EcdfPlot, insideStroke, outsideStroke } from "./EcdfPlot.tsx";
 
 type NumericLine = Extract<RegionTableLine, { kind: "numeric" }>;
 
@@ -12,6 +12,11 @@ export function RegionTableView({ lines, curves, otherName, versusLabel }: { lin
   if (lines.length === 0) return null;
   return (
     <table className="region-table" data-testid="region-numeric">
+      <caption className="ecdf-key">
+        Each plot: share of rows at or below each value.{" "}
+        <svg width={18} height={6} aria-hidden="true"><line x1={0} y1={3} x2={18} y2={3} stroke={insideStroke} strokeWidth={1.6} /></svg> region{" "}
+        <svg width={18} height={6} aria-hidden="true"><line x1={0} y1={3} x2={18} y2={3} stroke={outsideStroke} strokeWidth={1.2} strokeDasharray="3 2" /></svg> {otherName}
+      </caption>
       <thead>
         <tr>
           <th scope="col">column</th>
