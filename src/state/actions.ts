@@ -2,8 +2,8 @@ import { nodeMembers, readingRecord, type ByteReadOptions, type ParsedTable } fr
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
 import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
-import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { demoTable } from "./demo.ts";
+import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
