@@ -118,3 +118,6 @@ export { regionTable, type RegionTable, type RegionTableLine, type RegionTableOp
 export { readRecordTexts, type RecordTextOptions } from "./table/readRecordTexts.ts";
 export { regionRowsCsv, type Region } from "./export/regionRowsCsv.ts";
 export { regionTableCsv, regionTableHeader } from "./export/regionTableCsv.ts";
+export { nodeRowShare } from "./cover/nodeRowShare.ts";
+export { numericLevels } from "./table/numericLevels.ts";
+export { componentNodes, growByOneStep, majorityNodes, nodesHoldingRow, rowsInRegion, sharedRowCount } from "./regions/nodeSets.ts";

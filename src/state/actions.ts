@@ -4,6 +4,7 @@ import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
 import { createRegionActions } from "./regionActions.ts";
+import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
@@ -47,6 +48,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     readonly colorBy: string | null;
   }
   let lastLoad: LoadRequest | null = null;
+  let loadedSource: TableSource | null = null; // what the current table was read from, for reading rows again
 
   async function load(request: LoadRequest, options: ByteReadOptions): Promise<void> {
     const ticket = ++latestLoad;
@@ -66,6 +68,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       return;
     }
     const { source, hints, colorBy } = request;
+    loadedSource = request.tableSource;
     const table: ParsedTable = answer.table;
     const roles = defaultRoles(table, hints);
     const colour = colorBy ?? table.columns.find((c) => roles[c.name] === "outcome" && c.kind === "numeric")?.name ?? null;
@@ -114,7 +117,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     if (store.getState().stability.state === "running") set({ stability: idleStability });
     set({ build: { state: "running", phase: null, fraction: 0, error: null, elapsedMs: null } });
     const answer = await env.client.send({ type: "build", params }, (progress) => {
-      if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds") return;
+      if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds" || progress.phase === "region") return;
       set({ build: { ...store.getState().build, phase: progress.phase, fraction: progress.fraction } });
     });
     mark(answer.type === "cancelled" ? "shoal:build-cancelled" : "shoal:build-answered");
@@ -170,6 +173,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       set({ loadStatus: store.getState().table ? "ready" : "idle", loadError: null, loadNotice: cancelledNotice(lastLoad?.source.fileName ?? "the table") });
     },
     rebuild,
+    /** The text or file the current table was read from (null before the first load). */
+    loadedSource: (): TableSource | null => loadedSource,
     async loadDemo(): Promise<void> {
       set({ loadStatus: "loading", loadError: null });
       let text: string;
@@ -304,7 +309,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       if (!s.table || !s.result || !s.source) return null;
       const ticket = ++latestExport;
       const reading = s.report ? { reading: readingRecord(s.report.format, s.readOptions.ragged) } : {};
-      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s), ...reading };
+      const regions = s.regions.map((r) => ({ name: r.name, rows: r.rows }));
+      const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s), ...reading, regions };
       const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
       set({ exportStatus: { state: "running", error: null } });
       const answer = await env.client.send({ type: "exportZip", result: s.result, context });
@@ -348,11 +354,12 @@ function mark(name: string): void {
   globalThis.performance?.mark?.(name);
 }
 
-let appActions: Actions | null = null;
+let appActions: (Actions & RegionPaneActions) | null = null;
 
-/** Actions bound to the application's store and a worker, created on first use. */
-export function actions(): Actions {
-  appActions ??= createActions(workbenchStore, {
+/** Actions bound to the application's store and a worker, created on first use (the region pane's composed in). */
+export function actions(): Actions & RegionPaneActions {
+  if (appActions) return appActions;
+  const env: ActionEnvironment = {
     client: createWorkerClient(),
     fetchDemo: async () => {
       const response = await fetch(new URL(demoTable.url, document.baseURI));
@@ -360,6 +367,8 @@ export function actions(): Actions {
       return response.text();
     },
     now: () => performance.now(),
-  });
+  };
+  const base = createActions(workbenchStore, env);
+  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource) };
   return appActions;
 }

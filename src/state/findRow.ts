@@ -1,5 +1,5 @@
 import { cellText, type CoverResult, type ParsedTable } from "../core/index.ts";
-import { nodesHoldingRow } from "./nodeSets.ts";
+import { nodesHoldingRow } from "../core/index.ts";
 
 export type FindMode = "label" | "record";
 

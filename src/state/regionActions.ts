@@ -1,4 +1,4 @@
-import { componentNodes, growByOneStep, majorityNodes } from "./nodeSets.ts";
+import { componentNodes, growByOneStep, majorityNodes } from "../core/index.ts";
 import type { FindMode } from "./findRow.ts";
 import type { WorkbenchStore } from "./store.ts";
 

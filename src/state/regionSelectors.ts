@@ -1,6 +1,6 @@
 import { findRow, type RowPlace } from "./findRow.ts";
 import { memoizeLast } from "./memoizeLast.ts";
-import { majorityNodes, regionShare, sharedRowCount } from "./nodeSets.ts";
+import { majorityNodes, nodeRowShare, sharedRowCount } from "../core/index.ts";
 import { selectIdColumn, selectRegionRows } from "./selectors.ts";
 import type { NamedRegion } from "./slices/selectionSlice.ts";
 import type { WorkbenchState } from "./store.ts";
@@ -12,7 +12,7 @@ export const selectActiveRegion = (s: WorkbenchState): NamedRegion | null => s.r
 export const selectTrackedRows = (s: WorkbenchState): Uint32Array | null => selectActiveRegion(s)?.rows ?? selectRegionRows(s);
 
 const memoShare = memoizeLast((result: WorkbenchState["result"], region: NamedRegion | null): Float64Array | null =>
-  result && region ? regionShare(result.members, region.rows) : null,
+  result && region ? nodeRowShare(result.members, region.rows, result.rowsRead) : null,
 );
 
 /** Share of each node's rows in the active region (the shading after a rebuild), or null with no active region. */

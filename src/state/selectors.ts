@@ -8,7 +8,9 @@ import {
   type CoverParams,
   type ParsedTable,
 } from "../core/index.ts";
+import { specialFill } from "./colorChoices.ts";
 import { memoizeLast } from "./memoizeLast.ts";
+import type { NodeFill } from "./nodeFill.ts";
 
 /** Colour column name that stands for the seed-stability share of each row (not a table column). */
 export const stabilityColor = "@membership-stability";
@@ -47,14 +49,14 @@ export function selectCoverParams(s: WorkbenchState): CoverParams | null {
   };
 }
 
-/** How nodes are filled: a number per node on a sequential scale, a level per node, or nothing. */
-export type NodeFill =
-  | { readonly kind: "sequential"; readonly values: Float64Array; readonly caption: string }
-  | { readonly kind: "categorical"; readonly level: Int32Array; readonly levels: readonly string[]; readonly caption: string };
-
 const memoFill = memoizeLast(
-  (table: ParsedTable | null, result: WorkbenchState["result"], column: string | null, level: string | null, seedRuns: WorkbenchState["seedRuns"]): NodeFill | null => {
+  (
+    table: ParsedTable | null, result: WorkbenchState["result"], column: string | null, level: string | null, seedRuns: WorkbenchState["seedRuns"],
+    regions: WorkbenchState["regions"],
+  ): NodeFill | null => {
     if (!result) return null;
+    const special = specialFill(table, result, column, level, regions);
+    if (special !== undefined) return special;
     if (column === stabilityColor) {
       return seedRuns?.regionShare
         ? { kind: "sequential", values: nodeMeans(seedRuns.regionShare, result.members), caption: "node mean share of seeds keeping the row in the region" }
@@ -71,7 +73,7 @@ const memoFill = memoizeLast(
 );
 
 /** The fill of every node for the chosen colour column (mean, share of a level, or majority level), or null for a plain fill. */
-export const selectNodeFill = (s: WorkbenchState): NodeFill | null => memoFill(s.table, s.result, s.colorBy, s.colorLevel, s.seedRuns);
+export const selectNodeFill = (s: WorkbenchState): NodeFill | null => memoFill(s.table, s.result, s.colorBy, s.colorLevel, s.seedRuns, s.regions);
 
 /** Numeric fill values per node (NaN where a node has no value), or null when the fill is not numeric. */
 export const selectNodeColorValues = (s: WorkbenchState): Float64Array | null => {

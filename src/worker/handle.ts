@@ -16,6 +16,7 @@ import {
   zipExports,
 } from "../core/index.ts";
 import { createNodeStatistics } from "./createNodeStatistics.ts";
+import { regionRowsAnswer, regionTableAnswer } from "./regionAnswers.ts";
 import { laneOf, type Answer, type Progress, type Request } from "./protocol.ts";
 
 export type Handler = (request: Request, report: (progress: Progress) => void) => Answer | Promise<Answer>;
@@ -119,6 +120,11 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           return { id: request.id, type: "summarised", columns: nodeStatistics(request.rows, request.columns) };
         case "exportZip":
           return { id: request.id, type: "zipped", bytes: zipExports(coverExports(loaded(), request.result, request.context)) };
+        case "regionTable":
+          return regionTableAnswer(loaded(), request, { onProgress: (fraction) => progress("region", fraction), shouldStop: () => isStopped(request) });
+        case "regionRows":
+          return regionRowsAnswer(loaded(), request, { onProgress: (fraction) => progress("region", fraction), shouldStop: () => isStopped(request) })
+            .catch((error: unknown) => failure(request.id, error));
         default:
           return assertNever(request);
       }
@@ -153,6 +159,7 @@ export function transferables(answer: Answer): ArrayBuffer[] {
     return [...new Set([...figureBuffers(answer.sweep.figures), ...(answer.region ? [answer.region.jaccard.buffer as ArrayBuffer] : [])])];
   }
   if (answer.type === "zipped") return [answer.bytes.buffer as ArrayBuffer];
+  if (answer.type === "regionTabled") return [...new Set(answer.curves.flatMap((c) => [c.inside.buffer as ArrayBuffer, c.outside.buffer as ArrayBuffer]))];
   if (answer.type === "seeded") return answer.stability.regionShare ? [answer.stability.regionShare.buffer as ArrayBuffer] : [];
   if (answer.type !== "built") return [];
   const { result } = answer;

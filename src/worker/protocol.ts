@@ -7,11 +7,15 @@ import type {
   ExportContext,
   ParsedTable,
   RadiusBasis,
+  Region,
+  RegionTable,
   RadiusSweep,
   RegionTrack,
   SeedStability,
   SweepParams,
+  TableFormat,
   TableReport,
+  TextEncodingName,
 } from "../core/index.ts";
 
 /** What to read: text already in memory (the demo) or a file the user dropped or picked. */
@@ -42,7 +46,29 @@ export type Request =
   /** Statistics of one node's member rows (parsed-table rows) in the named numeric columns, against all rows. */
   | { readonly id: number; readonly type: "nodeStats"; readonly rows: Uint32Array; readonly columns: readonly string[] }
   /** The export zip of a result built on the worker's table. */
-  | { readonly id: number; readonly type: "exportZip"; readonly result: CoverResult; readonly context: ExportContext };
+  | { readonly id: number; readonly type: "exportZip"; readonly result: CoverResult; readonly context: ExportContext }
+  /**
+   * The region table of `region` (parsed-table rows) against the rest of a build's used rows, or
+   * against `versus`; the build's `rowsRead` and `usedRows` say which rows are on neither side.
+   */
+  | {
+      readonly id: number;
+      readonly type: "regionTable";
+      readonly rowsRead: number;
+      readonly usedRows: Uint32Array;
+      readonly region: Uint32Array;
+      readonly versus: Uint32Array | null;
+      readonly labelColumn: string | null;
+    }
+  /** region-rows.csv: the regions' rows with their cells read again from the source the table was loaded from. */
+  | {
+      readonly id: number;
+      readonly type: "regionRows";
+      readonly source: TableSource;
+      readonly format: TableFormat;
+      readonly encoding: TextEncodingName | null;
+      readonly regions: readonly Region[];
+    };
 
 export type RequestType = Request["type"];
 
@@ -52,7 +78,7 @@ export type RequestType = Request["type"];
  */
 export const lane = { compute: 0, load: 1, view: 2 } as const;
 export const laneOf = (type: RequestType): number =>
-  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" ? lane.view : lane.compute;
+  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" || type === "regionTable" || type === "regionRows" ? lane.view : lane.compute;
 
 /** One column's statistics over a node's member rows. */
 export interface NodeColumnStats {
@@ -60,6 +86,16 @@ export interface NodeColumnStats {
   readonly summary: ColumnSummary;
   /** (node mean − mean of all rows) / sd of all rows. */
   readonly standardisedDifference: number;
+}
+
+/**
+ * What a distribution plot of one numeric line draws: each side's values, ascending, as the worker's
+ * `ecdfSample` chose them (all present values up to `ecdfPoints`, else that many quantiles).
+ */
+export interface RegionCurve {
+  readonly column: string;
+  readonly inside: Float64Array;
+  readonly outside: Float64Array;
 }
 
 /** Final answers. `load` returns the parsed table so the main thread can colour, summarise and export. */
@@ -73,6 +109,8 @@ export type Answer =
   | { readonly id: number; readonly type: "summarised"; readonly columns: readonly NodeColumnStats[] }
   /** The zip's bytes, transferred. */
   | { readonly id: number; readonly type: "zipped"; readonly bytes: Uint8Array }
+  | { readonly id: number; readonly type: "regionTabled"; readonly table: RegionTable; readonly curves: readonly RegionCurve[] }
+  | { readonly id: number; readonly type: "regionRowsWritten"; readonly csv: string }
   | { readonly id: number; readonly type: "cancelled" }
   | { readonly id: number; readonly type: "failed"; readonly message: string };
 
@@ -80,7 +118,7 @@ export type Answer =
 export interface Progress {
   readonly id: number;
   readonly type: "progress";
-  readonly phase: BuildPhase | "parse" | "suggest" | "sweep" | "seeds";
+  readonly phase: BuildPhase | "parse" | "suggest" | "sweep" | "seeds" | "region";
   readonly fraction: number;
 }
 

@@ -1,4 +1,5 @@
 import { actions } from "../../state/actions.ts";
+import { levelsColor, regionColor, selectLevelColumns } from "../../state/colorChoices.ts";
 import { selectNodeFill, stabilityColor } from "../../state/selectors.ts";
 import { formatNumber } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
@@ -15,8 +16,11 @@ export function ColorLegend() {
   const fill = useWorkbench(selectNodeFill);
   const hasStability = useWorkbench((s) => s.seedRuns?.regionShare != null);
   const edgeCount = useWorkbench((s) => s.result?.edges.source.length ?? 0);
+  const regions = useWorkbench((s) => s.regions);
+  const levelColumns = useWorkbench(selectLevelColumns);
   if (!table) return null;
   const chosen = table.columns.find((c) => c.name === colorBy);
+  const chosenLevels = chosen?.categories?.levels ?? levelColumns.find((c) => levelsColor(c.name) === colorBy)?.levels;
   const scale = fill?.kind === "sequential" ? nodeColorScale(fill.values) : null;
   const gradient = scale
     ? `linear-gradient(to right, ${Array.from({ length: stops }, (_, i) => {
@@ -33,15 +37,17 @@ export function ColorLegend() {
           {table.columns.filter((c) => c.kind === "numeric" || c.categories).map((c) => (
             <option key={c.name} value={c.name}>{c.name}{c.kind === "numeric" ? "" : " (category)"}</option>
           ))}
+          {levelColumns.map((c) => <option key={`levels-${c.name}`} value={levelsColor(c.name)}>{c.name} (as categories)</option>)}
+          {regions.map((r) => <option key={`region-${r.id}`} value={regionColor(r.id)}>share of rows in {r.name}</option>)}
           {hasStability && <option value={stabilityColor}>stability of membership</option>}
         </select>
       </label>
-      {chosen?.categories && (
+      {chosenLevels && (
         <label>
           showing
           <select value={colorLevel ?? ""} onChange={(e) => actions().setColorLevel(e.currentTarget.value || null)}>
             <option value="">most common level</option>
-            {chosen.categories.levels.map((level) => <option key={level} value={level}>share of {level}</option>)}
+            {chosenLevels.map((level) => <option key={level} value={level}>share of {level}</option>)}
           </select>
         </label>
       )}

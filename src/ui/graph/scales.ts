@@ -1,6 +1,6 @@
 import { scaleSequential, type ScaleSequential } from "d3-scale";
 import { interpolateCividis } from "d3-scale-chromatic";
-import type { NodeFill } from "../../state/selectors.ts";
+import type { NodeFill } from "../../state/nodeFill.ts";
 
 export const missingColor = "#cfcac0"; // warm grey: no member has a value
 export const plainColor = "#7d8fa3"; // slate, when nothing is chosen to colour by

@@ -1,14 +1,16 @@
 import { useState, type KeyboardEvent } from "react";
 import { NodeList } from "./NodeList.tsx";
 import { NodePane } from "./NodePane.tsx";
+import { RegionPane } from "./RegionPane.tsx";
 import { StabilityPane } from "./StabilityPane.tsx";
 
 const tabs = [
   { id: "node", label: "Node" },
+  { id: "region", label: "Region" },
   { id: "stability", label: "Stability" },
 ] as const;
 
-/** The side pane: the open node's members, or the stability evidence; tabs move with arrow keys. */
+/** The side pane: the open node's members, what sets the region apart, or the stability evidence; tabs move with arrow keys. */
 export function InspectorTabs() {
   const [active, setActive] = useState<(typeof tabs)[number]["id"]>("node");
   const onKey = (event: KeyboardEvent<HTMLDivElement>): void => {
@@ -41,6 +43,8 @@ export function InspectorTabs() {
             <NodeList />
             <NodePane />
           </>
+        ) : active === "region" ? (
+          <RegionPane />
         ) : (
           <StabilityPane />
         )}

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { componentNodes, growByOneStep, majorityNodes, nodesHoldingRow, regionShare, rowsInRegion, sharedRowCount } from "../../src/state/nodeSets.ts";
-import { assertClose } from "../assertClose.ts";
+import { nodeRowShare } from "../../../src/core/cover/nodeRowShare.ts";
+import { componentNodes, growByOneStep, majorityNodes, nodesHoldingRow, rowsInRegion, sharedRowCount } from "../../../src/core/regions/nodeSets.ts";
+import { assertClose } from "../../assertClose.ts";
 
 // A small graph by hand: path 0 – 1 – 2 – 3, and a separate edge 4 – 5; node 6 alone.
 const graph = Object.freeze({
@@ -45,8 +46,8 @@ describe("majority rule for a region's nodes", () => {
   it("region rows {3, 4, 6, 7}: node 1 has 2 of 2 and node 2 has 2 of 3, both most; node 0 has 1 of 4 (worked by hand)", () => {
     expect(majorityNodes(members, Uint32Array.of(3, 4, 6, 7))).toEqual([1, 2]);
   });
-  it("the shares of rows {0, 1, 2, 4} are 3/4, 1/2, 0 and 0 for the empty node (worked by hand)", () => {
-    assertClose(regionShare(members, Uint32Array.of(0, 1, 2, 4)), [0.75, 0.5, 0, 0], { absolute: 0 }); // worked by hand
+  it("the shares of rows {0, 1, 2, 4} are 3/4, 1/2, 0 and NaN for the empty node (worked by hand)", () => {
+    assertClose(nodeRowShare(members, Uint32Array.of(0, 1, 2, 4), 8), [0.75, 0.5, 0, NaN], { absolute: 0 }); // worked by hand
   });
   it("an empty region selects no node", () => {
     expect(majorityNodes(members, new Uint32Array(0))).toEqual([]);

@@ -1,4 +1,6 @@
-import { nodeMembers, type CompressedLists, type CoverResult } from "../core/index.ts";
+import type { CoverResult } from "../cover/buildCover.ts";
+import { nodeMembers } from "../cover/nodeMeans.ts";
+import type { CompressedLists } from "../lists/compressedLists.ts";
 
 /** Every node in the same connected component as one of `nodes`, ascending. O(V). */
 export function componentNodes(result: Pick<CoverResult, "component">, nodes: readonly number[]): number[] {
@@ -35,15 +37,6 @@ export function rowsInRegion(members: CompressedLists, rows: Uint32Array): Uint3
     counts[k] = count;
   }
   return counts;
-}
-
-/** Share of each node's rows that lie in the region (0 for an empty node). */
-export function regionShare(members: CompressedLists, rows: Uint32Array): Float64Array {
-  const inside = rowsInRegion(members, rows);
-  return Float64Array.from(inside, (count, k) => {
-    const size = members.offsets[k + 1]! - members.offsets[k]!;
-    return size > 0 ? count / size : 0;
-  });
 }
 
 /** Nodes most of whose rows lie in the region: strictly more than half (exactly half is not most), ascending. */
