@@ -21,7 +21,7 @@ describe("kolmogorovSurvival", () => {
   });
 
   it("Q(1) rounds to the four-decimal table value 0.2700", () => {
-    assertClose(kolmogorovSurvival(1), 0.27, { absolute: 5e-5 }); // published table of the Kolmogorov distribution, four decimals (from memory)
+    assertClose(kolmogorovSurvival(1), 0.27, { absolute: 5e-5 }); // N. Smirnov, Ann. Math. Statist. 19:279–281, 1948, table of the limiting distribution, four decimals (from memory; SciPy above agrees)
   });
 
   it("the classic critical values: Q(1.358) ≈ 0.05, Q(1.628) ≈ 0.01, Q(1.36) ≈ 0.0495, Q(1.63) ≈ 0.0098", () => {

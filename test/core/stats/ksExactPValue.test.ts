@@ -60,6 +60,27 @@ describe("ksExactPValue", () => {
     assertClose(ksExactPValue(0.5, 10, 10), 0.16782134274394334); // SciPy 1.17.1 ks_2samp(range(10), range(5, 15), method="exact")
   });
 
+  it("equal sizes follow the published closed form P(D ≥ k/n) = 2 Σ_j (−1)^(j−1) C(2n, n − jk) / C(2n, n): n = 10, k = 5 gives 31,006 / 184,756", () => {
+    // B. V. Gnedenko and V. S. Korolyuk, Dokl. Akad. Nauk SSSR 80:525–528, 1951 (the reflection formula for m = n),
+    // evaluated exactly by hand: C(20, 5) = 15,504, C(20, 0) = 1, C(20, 10) = 184,756, so 2 · (15,504 − 1) / 184,756
+    assertClose(ksExactPValue(0.5, 10, 10), 31006 / 184756, { relative: 1e-14 });
+    // and for every n ≤ 30 and k, against the same closed form in exact integer arithmetic
+    const binomial = (a: number, b: number): bigint => {
+      if (b < 0 || b > a) return 0n;
+      let c = 1n;
+      for (let i = 1; i <= b; ++i) c = (c * BigInt(a - b + i)) / BigInt(i);
+      return c;
+    };
+    for (let n = 1; n <= 30; ++n) {
+      for (let k = 1; k <= n; ++k) {
+        let sum = 0n;
+        for (let j = 1; j * k <= n; ++j) sum += (j % 2 === 1 ? 2n : -2n) * binomial(2 * n, n - j * k);
+        const total = binomial(2 * n, n);
+        assertClose(ksExactPValue(k / n, n, n), Number((sum * 10n ** 18n) / total) / 1e18, { relative: 1e-12, absolute: 1e-17 });
+      }
+    }
+  });
+
   it("m = 7, n = 5, D = 4/7 gives 0.23737373737373738", () => {
     assertClose(ksExactPValue(4 / 7, 7, 5), 0.23737373737373738); // SciPy 1.17.1 ks_2samp(range(7), [3.5 … 7.5], method="exact")
   });
