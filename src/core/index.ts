@@ -121,3 +121,6 @@ export { regionTableCsv, regionTableHeader } from "./export/regionTableCsv.ts";
 export { nodeRowShare } from "./cover/nodeRowShare.ts";
 export { numericLevels } from "./table/numericLevels.ts";
 export { componentNodes, growByOneStep, majorityNodes, nodesHoldingRow, rowsInRegion, sharedRowCount } from "./regions/nodeSets.ts";
+export type { Hotspot, HotspotDirection, HotspotOptions, HotspotScan, HotspotScore, HotspotSearch } from "./hotspots/types.ts";
+export { scanHotspots } from "./hotspots/scanHotspots.ts";
+export { countCandidateSets } from "./hotspots/countCandidateSets.ts";
