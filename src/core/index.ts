@@ -124,3 +124,9 @@ export { componentNodes, growByOneStep, majorityNodes, nodesHoldingRow, rowsInRe
 export type { Hotspot, HotspotDirection, HotspotOptions, HotspotScan, HotspotScore, HotspotSearch } from "./hotspots/types.ts";
 export { scanHotspots } from "./hotspots/scanHotspots.ts";
 export { countCandidateSets } from "./hotspots/countCandidateSets.ts";
+export { hotspotDefaults } from "./hotspots/hotspotDefaults.ts";
+export { bernoulliScore } from "./hotspots/bernoulliScore.ts";
+export { normalScore } from "./hotspots/normalScore.ts";
+export { rankScore, midranks } from "./hotspots/rankScore.ts";
+export { monteCarloP } from "./hotspots/permutationMaxima.ts";
+export { jaccardRows } from "./hotspots/jaccardRows.ts";

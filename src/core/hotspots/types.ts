@@ -22,8 +22,10 @@ export interface HotspotOptions extends RunControl {
   readonly scanSeed?: number;
   /** k landmark seeds for the opt-in seed stability (99 replicates per run); 0 or absent for none. */
   readonly stabilitySeeds?: number;
-  /** At most this many candidate sets before the heuristic takes over. */
+  /** At most this many candidate sets before the heuristic takes over. Default 2,000,000 (hotspotDefaults). */
   readonly budget?: number;
+  /** Clock for the timings (milliseconds); default Date.now. */
+  readonly now?: () => number;
 }
 
 export interface Hotspot {
@@ -67,4 +69,12 @@ export interface HotspotScan {
   /** Up to 10, best first, no two sharing a node. */
   readonly hotspots: readonly Hotspot[];
   readonly timingsMs: Readonly<Record<string, number>>;
+  /** Candidate regions actually scored: the flexible ones within the row cap, or the heuristic's regions in the observed data. */
+  readonly regionsScored?: number;
+  /** A region holds at most this many rows: half of the scanned rows, rounded down. */
+  readonly rowCap?: number;
+  /** One sentence when every score is 0 and p = 1 (no cases, only cases, a constant outcome, fewer than two rows). */
+  readonly notice?: string;
+  /** How the seed-stability runs placed their landmarks (the build's rule when it takes a seed, else greedy-shuffled); absent when not run. */
+  readonly stabilityRule?: string;
 }
