@@ -81,7 +81,7 @@ export { standardisedDifference } from "./stats/standardisedDifference.ts";
 export { coverExports, exportSchemaVersion, type CoverExports, type ExportContext, type ReadingRecord } from "./export/coverExports.ts";
 export { readingRecord } from "./export/readingRecord.ts";
 export { zipExports } from "./export/zipExports.ts";
-export { csvNumber, csvText, csvLine } from "./export/csvCell.ts";
+export { csvNumber, csvText, csvLine, csvQuoted } from "./export/csvCell.ts";
 export { randomSource, shuffledOrder } from "./random.ts";
 export { Cancelled, isCancelled } from "./control.ts";
 export { radiusSweep, sweepPrepared, defaultSweepSteps, type RadiusSweep, type SweepOptions } from "./sweep/radiusSweep.ts";
