@@ -13,7 +13,7 @@ function xlogx(x: number, y: number): number {
  * outside rate (C−c)/(N−n); otherwise 0.
  * Source: M. Kulldorff, Commun Stat Theory Methods 26:1481–1496, 1997 (the Bernoulli model). O(1).
  * Degenerate: n = 0 or n = N gives 0; C = 0 or C = N (no cases, only cases) gives 0 everywhere.
- * @example bernoulliScore(4, 3, 10, 4, "high") // => 1.7261147... (3 ln 3/4 + ln 1/4 + ln 1/6 + 5 ln 5/6 − 4 ln 0.4 − 6 ln 0.6)
+ * @example bernoulliScore(4, 3, 10, 4, "high") // => 1.777408838419503 (3 ln 3/4 + ln 1/4 + ln 1/6 + 5 ln 5/6 − 4 ln 0.4 − 6 ln 0.6)
  */
 export function bernoulliScore(n: number, c: number, total: number, cases: number, direction: HotspotDirection): number {
   const m = total - n;
