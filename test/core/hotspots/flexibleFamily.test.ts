@@ -23,7 +23,13 @@ function bruteForce(graph: FamilyGraph): string[] {
     const set = Array.from({ length: count }, (_, i) => i).filter((i) => mask & (1 << i));
     const seen = new Set([set[0]!]);
     const stack = [set[0]!];
-    while (stack.length > 0) for (const j of adjacent[stack.pop()!]!) if (set.includes(j) && !seen.has(j)) (seen.add(j), stack.push(j));
+    while (stack.length > 0) {
+      for (const j of adjacent[stack.pop()!]!) {
+        if (!set.includes(j) || seen.has(j)) continue;
+        seen.add(j);
+        stack.push(j);
+      }
+    }
     if (seen.size !== set.length) continue;
     if (set.some((i) => set.every((j) => j === i || graph.neighbours[i]!.includes(j)))) found.push(set.join(" "));
   }

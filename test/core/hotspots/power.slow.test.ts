@@ -48,7 +48,7 @@ it("with a planted ball of 10% of 1,500 rows at 35% vs 10%, the top hotspot has 
   let oracleAtBar = 0;
   const ratios: number[] = [];
   for (let seed = 1; seed <= tables; ++seed) {
-    let planted = new Uint32Array(0);
+    let planted: Uint32Array = new Uint32Array(0);
     const table = syntheticTable(rows, 5, 1000 + seed, (columns, random) => {
       planted = ballAround(columns, 0, rows / 10);
       const inside = new Uint8Array(rows);
