@@ -1,3 +1,4 @@
+import type { StepHook } from "../control.ts";
 import { mean } from "../stats/mean.ts";
 import { quantileSorted } from "../stats/quantileSorted.ts";
 
@@ -22,7 +23,7 @@ export interface BootstrapDifference {
  * Degenerate: an empty side gives NaN everywhere.
  * @example bootstrapDifference([1, 1], [0, 0], 2000, random).low // => 1 (no spread on either side)
  */
-export function bootstrapDifference(inside: ArrayLike<number>, outside: ArrayLike<number>, resamples: number, random: () => number): BootstrapDifference {
+export function bootstrapDifference(inside: ArrayLike<number>, outside: ArrayLike<number>, resamples: number, random: () => number, onStep?: StepHook): BootstrapDifference {
   if (inside.length === 0 || outside.length === 0) return { inside: NaN, outside: NaN, difference: NaN, low: NaN, high: NaN };
   const insideMean = mean(inside);
   const outsideMean = mean(outside);
@@ -33,7 +34,10 @@ export function bootstrapDifference(inside: ArrayLike<number>, outside: ArrayLik
     for (let k = 0; k < n; ++k) s += values[Math.floor(random() * n)]!;
     return s / n;
   };
-  for (let b = 0; b < resamples; ++b) differences[b] = resampledMean(inside) - resampledMean(outside);
+  for (let b = 0; b < resamples; ++b) {
+    if (b % 64 === 0) onStep?.(); // a chance to cancel: a resample costs O(n)
+    differences[b] = resampledMean(inside) - resampledMean(outside);
+  }
   differences.sort();
   return { inside: insideMean, outside: outsideMean, difference: insideMean - outsideMean, low: quantileSorted(differences, 0.025), high: quantileSorted(differences, 0.975) };
 }

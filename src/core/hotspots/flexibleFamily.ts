@@ -1,3 +1,5 @@
+import { adjacencySets } from "./adjacencySets.ts";
+
 /** Candidate regions as packed node lists: region k holds nodes[offsets[k] .. offsets[k + 1]), ascending. */
 export interface CandidateFamily {
   readonly offsets: Uint32Array;
@@ -24,11 +26,7 @@ export interface FamilyGraph {
  */
 export function enumerateFamily(graph: FamilyGraph, visit: (nodes: Uint32Array, size: number) => void, onNode?: (done: number) => void): void {
   const count = graph.neighbours.length;
-  const adjacent: Set<number>[] = Array.from({ length: count }, () => new Set<number>());
-  for (let e = 0; e < graph.source.length; ++e) {
-    adjacent[graph.source[e]!]!.add(graph.target[e]!);
-    adjacent[graph.target[e]!]!.add(graph.source[e]!);
-  }
+  const adjacent = adjacencySets(graph);
   const hoods = graph.neighbours.map((list, i) => Uint32Array.from([i, ...list]));
   const buffer = new Uint32Array(16);
   const local = new Uint32Array(16);
@@ -79,14 +77,24 @@ export function countFamily(graph: FamilyGraph): number {
   return total;
 }
 
-/** The family packed (enumerateFamily); throws when it passes `budget` sets, which the caller counted first. */
-export function flexibleFamily(graph: FamilyGraph, budget = Infinity): CandidateFamily {
-  const offsets: number[] = [0];
-  const nodes: number[] = [];
+/**
+ * The family's exact size and, when it is at most `budget` sets, the family packed
+ * (enumerateFamily); past the budget the enumeration goes on counting only, so one pass serves both.
+ */
+export function flexibleFamily(graph: FamilyGraph, budget = Infinity, onNode?: (done: number) => void): { readonly count: number; readonly family: CandidateFamily | null } {
+  let offsets: number[] | null = [0];
+  let nodes: number[] = [];
+  let count = 0;
   enumerateFamily(graph, (set, size) => {
-    if (offsets.length > budget) throw new Error(`candidate family over its budget: more than ${budget} sets`);
+    ++count;
+    if (!offsets) return;
+    if (count > budget) {
+      offsets = null;
+      nodes = [];
+      return;
+    }
     for (let a = 0; a < size; ++a) nodes.push(set[a]!);
     offsets.push(nodes.length);
-  });
-  return { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes) };
+  }, onNode);
+  return { count, family: offsets ? { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes) } : null };
 }

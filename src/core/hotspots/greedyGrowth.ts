@@ -3,6 +3,8 @@ import type { FamilyGraph } from "./flexibleFamily.ts";
 /** What greedy growth reads: each node's row count, the cap on a region's rows, and the score. */
 export interface GrowthInput {
   readonly graph: FamilyGraph;
+  /** The graph's neighbours of each node (adjacencySets), made once for every replicate. */
+  readonly adjacent: readonly ReadonlySet<number>[];
   /** Row count and value sum per node. */
   readonly nodeCounts: Uint32Array;
   readonly nodeSums: Float64Array;
@@ -24,13 +26,8 @@ export interface GrowthInput {
  * @example greedyGrowth(path 0–1–2 with sums [0, 1, 1], counts 1 each, cap 2, score s) // => 2
  */
 export function greedyGrowth(input: GrowthInput, visit?: (nodes: Uint32Array, size: number, score: number) => void): number {
-  const { graph, nodeCounts, nodeSums, cap, score } = input;
+  const { graph, adjacent, nodeCounts, nodeSums, cap, score } = input;
   const count = graph.neighbours.length;
-  const adjacent: Set<number>[] = Array.from({ length: count }, () => new Set<number>());
-  for (let e = 0; e < graph.source.length; ++e) {
-    adjacent[graph.source[e]!]!.add(graph.target[e]!);
-    adjacent[graph.target[e]!]!.add(graph.source[e]!);
-  }
   const region = new Uint32Array(16);
   let best = 0;
   for (let i = 0; i < count; ++i) {

@@ -6,7 +6,8 @@ import { bootstrapDifference } from "./bootstrapDifference.ts";
 import { coverGeometry } from "./coverGeometry.ts";
 import { disjointBest } from "./disjointBest.ts";
 import { familyMaximum, nodeSums } from "./familyMaximum.ts";
-import { countFamily, flexibleFamily, type CandidateFamily, type FamilyGraph } from "./flexibleFamily.ts";
+import { flexibleFamily, type CandidateFamily, type FamilyGraph } from "./flexibleFamily.ts";
+import { adjacencySets } from "./adjacencySets.ts";
 import { greedyGrowth } from "./greedyGrowth.ts";
 import { hotspotDefaults } from "./hotspotDefaults.ts";
 import { landmarkNeighbours } from "./landmarkNeighbours.ts";
@@ -60,25 +61,28 @@ export function scanOnce(parsed: ParsedTable, result: CoverResult, options: Hots
   const nodeCount = result.landmarks.length;
   const graph: FamilyGraph = { neighbours: landmarkNeighbours(geometry, maxNodes), source: result.edges.source, target: result.edges.target };
   stop();
-  const candidateSets = countFamily(graph);
-  const search = candidateSets > budget ? "heuristic" : "flexible";
+  // counted exactly in the same pass that packs the family, when it fits the budget
+  const enumerated = flexibleFamily(graph, budget, (done) => done % 64 === 0 && stop());
+  const candidateSets = enumerated.count;
+  const search = enumerated.family ? "flexible" : "heuristic";
   const nodeCounts = new Uint32Array(nodeCount);
   for (let i = 0; i < total; ++i) nodeCounts[nodeOf[i]!]!++;
   const cap = Math.floor(total / 2);
-  const family = search === "flexible" ? withinCap(flexibleFamily(graph), nodeCounts, cap) : null;
+  const family = enumerated.family ? withinCap(enumerated.family, nodeCounts, cap) : null;
   const familyTime = lap();
   options.onProgress?.(0.05);
 
   // the observed scores, and every region that could be reported
   const sums = nodeSums(scorer.values, nodeOf, new Float64Array(nodeCount));
   const regionNodes: Uint32Array[] = [];
+  const adjacent = family ? [] : adjacencySets(graph);
   let scores: Float64Array;
   if (family) {
     scores = new Float64Array(family.counts.length);
     familyMaximum(family, family.counts, sums, scorer.score, scores);
   } else {
     const found: number[] = [];
-    greedyGrowth({ graph, nodeCounts, nodeSums: sums, cap, score: scorer.score }, (nodes, size, value) => {
+    greedyGrowth({ graph, adjacent, nodeCounts, nodeSums: sums, cap, score: scorer.score }, (nodes, size, value) => {
       regionNodes.push(nodes.slice(0, size).sort());
       found.push(value);
     });
@@ -92,7 +96,7 @@ export function scanOnce(parsed: ParsedTable, result: CoverResult, options: Hots
   const replicateSums = new Float64Array(nodeCount);
   const maximum = (permuted: Float64Array): number => {
     nodeSums(permuted, nodeOf, replicateSums);
-    return family ? familyMaximum(family, family.counts, replicateSums, scorer.score) : greedyGrowth({ graph, nodeCounts, nodeSums: replicateSums, cap, score: scorer.score });
+    return family ? familyMaximum(family, family.counts, replicateSums, scorer.score) : greedyGrowth({ graph, adjacent, nodeCounts, nodeSums: replicateSums, cap, score: scorer.score });
   };
   // a degenerate outcome scores 0 in every order: p = 1 without replicates
   const maxima = chosen.length > 0 ? permutationMaxima(scorer.values, replicates, random, maximum, partOf(options, 0.05, 0.85)) : new Float64Array(0);
@@ -112,7 +116,7 @@ export function scanOnce(parsed: ParsedTable, result: CoverResult, options: Hots
         hotspotRows.push(rows[i]!);
       } else outside.push(outcome[i]!);
     }
-    const effect = bootstrapDifference(inside, outside, hotspotDefaults.bootstrapResamples, random);
+    const effect = bootstrapDifference(inside, outside, hotspotDefaults.bootstrapResamples, random, stop);
     options.onProgress?.(0.9 + (0.1 * (index + 1)) / chosen.length);
     return {
       rank: index + 1,

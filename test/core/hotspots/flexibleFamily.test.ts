@@ -37,7 +37,7 @@ function bruteForce(graph: FamilyGraph): string[] {
 }
 
 const familySets = (graph: FamilyGraph): string[] => {
-  const family = flexibleFamily(graph);
+  const family = flexibleFamily(graph).family!;
   return Array.from({ length: family.offsets.length - 1 }, (_, k) => Array.from(family.nodes.subarray(family.offsets[k]!, family.offsets[k + 1]!)).join(" ")).sort();
 };
 
@@ -66,6 +66,7 @@ describe("the flexibly shaped family (Tango and Takahashi 2005) against brute-fo
         expect(new Set(sets).size).toBe(sets.length);
         expect(sets).toEqual(bruteForce(graph));
         expect(countFamily(graph)).toBe(sets.length);
+        expect(flexibleFamily(graph).count).toBe(sets.length);
       });
     }
   }
@@ -86,6 +87,13 @@ describe("the flexibly shaped family (Tango and Takahashi 2005) against brute-fo
   it("counts at K = 3 on the path of 6: 15 (6 singletons, 5 pairs, 4 triples)", () => {
     // worked by hand: node i's 2 nearest are i − 1 and i + 1 (ends: the two next inward), so every interval of length ≤ 3 and no longer
     expect(countFamily(graphOf(line, pathEdges, 3))).toBe(15);
+  });
+
+  it("past its budget the family is counted but not packed: the complete graph of 6 at K = 6 counts 63 with a budget of 10", () => {
+    const over = flexibleFamily(graphOf(circle, completeEdges, n), 10);
+    expect(over.count).toBe(63); // worked by hand: every non-empty subset of 6
+    expect(over.family).toBeNull();
+    expect(flexibleFamily(graphOf(circle, completeEdges, n), 63).family!.offsets.length).toBe(64); // worked by hand: 63 sets fit a budget of 63
   });
 
   it("path 0–1–2 with K = 3 has 6 sets (the JSDoc example)", () => {

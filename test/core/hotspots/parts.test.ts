@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { bootstrapDifference } from "../../../src/core/hotspots/bootstrapDifference.ts";
 import { disjointBest } from "../../../src/core/hotspots/disjointBest.ts";
 import { familyMaximum, nodeSums } from "../../../src/core/hotspots/familyMaximum.ts";
+import { adjacencySets } from "../../../src/core/hotspots/adjacencySets.ts";
 import { greedyGrowth } from "../../../src/core/hotspots/greedyGrowth.ts";
 import { monteCarloP, permutationMaxima } from "../../../src/core/hotspots/permutationMaxima.ts";
 import { jaccardRows, randomSource } from "../../../src/core/index.ts";
@@ -56,7 +57,7 @@ describe("region sums and selection", () => {
 
   it("greedy growth on the path 0–1–2 with sums 0, 1, 1, one row each, cap 2 and score s reaches 2 (the JSDoc example)", () => {
     const graph = { neighbours: [Uint32Array.of(1, 2), Uint32Array.of(0, 2), Uint32Array.of(1, 0)], source: Uint32Array.of(0, 1), target: Uint32Array.of(1, 2) };
-    const best = greedyGrowth({ graph, nodeCounts: Uint32Array.of(1, 1, 1), nodeSums: Float64Array.of(0, 1, 1), cap: 2, score: (_n, s) => s });
+    const best = greedyGrowth({ graph, adjacent: adjacencySets(graph), nodeCounts: Uint32Array.of(1, 1, 1), nodeSums: Float64Array.of(0, 1, 1), cap: 2, score: (_n, s) => s });
     expect(best).toBe(2); // worked by hand: from node 1 (or 2), add the other: {1, 2} sums to 2; three nodes pass the cap
   });
 });
