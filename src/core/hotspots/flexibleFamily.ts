@@ -1,9 +1,17 @@
 import { adjacencySets } from "./adjacencySets.ts";
 
-/** Candidate regions as packed node lists: region k holds nodes[offsets[k] .. offsets[k + 1]), ascending. */
+/**
+ * Candidate regions as packed node lists: region k holds nodes[offsets[k] .. offsets[k + 1]),
+ * ascending. Regions found by enumeration also carry where they were kept: the node `origins[k]`
+ * (ascending over k) and the bit mask `masks[k]` over that node's neighbourhood (bit 0 the node
+ * itself, bit b its b-th nearest), which lets a replicate sum every subset of a neighbourhood at
+ * once (familyMaximumByCount).
+ */
 export interface CandidateFamily {
   readonly offsets: Uint32Array;
   readonly nodes: Uint32Array;
+  readonly origins?: Uint32Array;
+  readonly masks?: Uint16Array;
 }
 
 /** The graph a family lives on: each node's K − 1 nearest nodes (landmarkNeighbours) and the edges of the nerve. */
@@ -20,11 +28,11 @@ export interface FamilyGraph {
  * Source: T. Tango and K. Takahashi, Int J Health Geogr 4:11, 2005 (the family Z_1k, connected
  * sets within the K nearest regions). At most N·2^(K−1) sets; the enumeration visits exactly
  * N·2^(K−1) bit masks, each tested for connectedness with O(K) word operations, and each
- * connected one for duplicates in O(|S|²·K). `visit(nodes, size)` receives each kept set, nodes
+ * connected one for duplicates in O(|S|²·K). `visit(nodes, size, origin, mask)` receives each kept set, nodes
  * ascending in a buffer it must copy to keep. A graph with no nodes has no sets.
  * @example countFamily(path 0–1–2 with every node's 2 nearest, K = 3) // => 6 (3 singletons, 2 pairs, 1 triple)
  */
-export function enumerateFamily(graph: FamilyGraph, visit: (nodes: Uint32Array, size: number) => void, onNode?: (done: number) => void): void {
+export function enumerateFamily(graph: FamilyGraph, visit: (nodes: Uint32Array, size: number, origin: number, mask: number) => void, onNode?: (done: number) => void): void {
   const count = graph.neighbours.length;
   const adjacent = adjacencySets(graph);
   const hoods = graph.neighbours.map((list, i) => Uint32Array.from([i, ...list]));
@@ -53,7 +61,7 @@ export function enumerateFamily(graph: FamilyGraph, visit: (nodes: Uint32Array, 
       for (let b = 0; b < k; ++b) if (mask & (1 << b)) buffer[size++] = hood[b]!;
       const set = buffer.subarray(0, size).sort();
       if (foundEarlier(set, i, hoods)) continue;
-      visit(set, size);
+      visit(set, size, i, mask);
     }
     onNode?.(i + 1);
   }
@@ -84,17 +92,22 @@ export function countFamily(graph: FamilyGraph): number {
 export function flexibleFamily(graph: FamilyGraph, budget = Infinity, onNode?: (done: number) => void): { readonly count: number; readonly family: CandidateFamily | null } {
   let offsets: number[] | null = [0];
   let nodes: number[] = [];
+  let origins: number[] = [];
+  let masks: number[] = [];
   let count = 0;
-  enumerateFamily(graph, (set, size) => {
+  enumerateFamily(graph, (set, size, origin, mask) => {
     ++count;
     if (!offsets) return;
     if (count > budget) {
       offsets = null;
-      nodes = [];
+      nodes = origins = masks = [];
       return;
     }
     for (let a = 0; a < size; ++a) nodes.push(set[a]!);
     offsets.push(nodes.length);
+    origins.push(origin);
+    masks.push(mask);
   }, onNode);
-  return { count, family: offsets ? { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes) } : null };
+  const family = offsets ? { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes), origins: Uint32Array.from(origins), masks: Uint16Array.from(masks) } : null;
+  return { count, family };
 }

@@ -5,7 +5,7 @@ import type { ParsedTable } from "../table/types.ts";
 import { bootstrapDifference } from "./bootstrapDifference.ts";
 import { coverGeometry } from "./coverGeometry.ts";
 import { disjointBest } from "./disjointBest.ts";
-import { familyMaximum, nodeSums } from "./familyMaximum.ts";
+import { countGroups, familyMaximum, familyMaximumByCount, nodeSums } from "./familyMaximum.ts";
 import { flexibleFamily, type CandidateFamily, type FamilyGraph } from "./flexibleFamily.ts";
 import { adjacencySets } from "./adjacencySets.ts";
 import { greedyGrowth } from "./greedyGrowth.ts";
@@ -94,9 +94,10 @@ export function scanOnce(parsed: ParsedTable, result: CoverResult, options: Hots
 
   const random = randomSource(scanSeed);
   const replicateSums = new Float64Array(nodeCount);
+  const groups = family ? countGroups(family.counts, graph.neighbours) : null;
   const maximum = (permuted: Float64Array): number => {
     nodeSums(permuted, nodeOf, replicateSums);
-    return family ? familyMaximum(family, family.counts, replicateSums, scorer.score) : greedyGrowth({ graph, adjacent, nodeCounts, nodeSums: replicateSums, cap, score: scorer.score });
+    return family ? familyMaximumByCount(family, groups!, replicateSums, scorer.score) : greedyGrowth({ graph, adjacent, nodeCounts, nodeSums: replicateSums, cap, score: scorer.score });
   };
   // a degenerate outcome scores 0 in every order: p = 1 without replicates
   const maxima = chosen.length > 0 ? permutationMaxima(scorer.values, replicates, random, maximum, partOf(options, 0.05, 0.85)) : new Float64Array(0);
@@ -164,11 +165,13 @@ function degenerateNotice(score: HotspotScore, total: number): string {
   return "the outcome is constant: every score is 0 and p = 1";
 }
 
-/** The family's regions holding between 1 and `cap` scanned rows, with their row counts. O(total region size). */
+/** The family's regions holding between 1 and `cap` scanned rows, with their row counts (origins and masks kept). O(total region size). */
 function withinCap(family: CandidateFamily, nodeCounts: Uint32Array, cap: number): CandidateFamily & { readonly counts: Uint32Array } {
   const offsets: number[] = [0];
   const nodes: number[] = [];
   const counts: number[] = [];
+  const origins: number[] = [];
+  const masks: number[] = [];
   for (let k = 0; k + 1 < family.offsets.length; ++k) {
     let n = 0;
     for (let t = family.offsets[k]!; t < family.offsets[k + 1]!; ++t) n += nodeCounts[family.nodes[t]!]!;
@@ -176,6 +179,11 @@ function withinCap(family: CandidateFamily, nodeCounts: Uint32Array, cap: number
     for (let t = family.offsets[k]!; t < family.offsets[k + 1]!; ++t) nodes.push(family.nodes[t]!);
     offsets.push(nodes.length);
     counts.push(n);
+    if (family.origins && family.masks) {
+      origins.push(family.origins[k]!);
+      masks.push(family.masks[k]!);
+    }
   }
-  return { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes), counts: Uint32Array.from(counts) };
+  const located = family.origins && family.masks ? { origins: Uint32Array.from(origins), masks: Uint16Array.from(masks) } : {};
+  return { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes), counts: Uint32Array.from(counts), ...located };
 }
