@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { bootstrapDifference } from "../../../src/core/hotspots/bootstrapDifference.ts";
 import { disjointBest } from "../../../src/core/hotspots/disjointBest.ts";
-import { familyMaximum, nodeSums } from "../../../src/core/hotspots/familyMaximum.ts";
+import { countGroups, familyMaximum, familyMaximumByCount, nodeSums } from "../../../src/core/hotspots/familyMaximum.ts";
 import { adjacencySets } from "../../../src/core/hotspots/adjacencySets.ts";
 import { greedyGrowth } from "../../../src/core/hotspots/greedyGrowth.ts";
 import { monteCarloP, permutationMaxima } from "../../../src/core/hotspots/permutationMaxima.ts";
@@ -44,6 +44,11 @@ describe("region sums and selection", () => {
     const scores = new Float64Array(2);
     expect(familyMaximum(family, Uint32Array.of(1, 3), Float64Array.of(1, 2), (n, s) => s / n, scores)).toBe(1); // worked by hand: 1/1 and 3/3
     assertClose(scores, [1, 1]); // worked by hand
+  });
+
+  it("familyMaximumByCount of the same regions is 1 too (the JSDoc example)", () => {
+    const family = { offsets: Uint32Array.of(0, 1, 3), nodes: Uint32Array.of(0, 0, 1) };
+    expect(familyMaximumByCount(family, countGroups(Uint32Array.of(1, 3)), Float64Array.of(1, 2), (n, s) => s / n)).toBe(1); // worked by hand: 1/1 and 3/3
   });
 
   it("nodeSums adds each row's value to its node", () => {

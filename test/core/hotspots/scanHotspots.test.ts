@@ -41,6 +41,17 @@ describe("rows in the scan", () => {
   });
 });
 
+describe("candidate count", () => {
+  it("rows at 0, 0.5, 1, 1.5, 2 with r = 0.5 give the path of nodes 0–1–2, whose family at K = 3 has 6 sets (the JSDoc example)", () => {
+    const table = pointsTable(["x"], [[0], [0.5], [1], [1.5], [2]]);
+    const result = buildCover(table, { features: ["x"], scale: "none", metric: "euclidean", radius: 0.5, landmarks: "greedy-file-order", seed: 1 });
+    expect(Array.from(result.edges.source)).toEqual([0, 1]); // worked by hand: landmarks at 0, 1, 2; balls share 0.5 and 1.5
+    expect(Array.from(result.edges.target)).toEqual([1, 2]);
+    expect(countCandidateSets(table, result, 3)).toBe(6); // worked by hand: 3 singletons, 2 pairs, 1 triple
+    expect(() => countCandidateSets(table, result, 0)).toThrow("invalid maximum nodes: 0 (1 to 15)");
+  });
+});
+
 describe("the hotspot scan on a planted block", () => {
   const scan = scanHotspots(gridTable, gridBuild, { outcome: "flag", replicates: 19, scanSeed: 3 });
 
