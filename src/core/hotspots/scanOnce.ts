@@ -6,7 +6,8 @@ import { bootstrapDifference } from "./bootstrapDifference.ts";
 import { coverGeometry } from "./coverGeometry.ts";
 import { disjointBest } from "./disjointBest.ts";
 import { countGroups, familyMaximum, familyMaximumByCount, nodeSums } from "./familyMaximum.ts";
-import { flexibleFamily, type CandidateFamily, type FamilyGraph } from "./flexibleFamily.ts";
+import { flexibleFamily, type FamilyGraph } from "./flexibleFamily.ts";
+import { withinCap } from "./withinCap.ts";
 import { adjacencySets } from "./adjacencySets.ts";
 import { greedyGrowth } from "./greedyGrowth.ts";
 import { hotspotDefaults } from "./hotspotDefaults.ts";
@@ -163,27 +164,4 @@ function degenerateNotice(score: HotspotScore, total: number): string {
   if (total < 2) return `fewer than two rows have an outcome value (${total}): every score is 0 and p = 1`;
   if (score === "bernoulli") return "the outcome has no cases or only cases: every score is 0 and p = 1";
   return "the outcome is constant: every score is 0 and p = 1";
-}
-
-/** The family's regions holding between 1 and `cap` scanned rows, with their row counts (origins and masks kept). O(total region size). */
-function withinCap(family: CandidateFamily, nodeCounts: Uint32Array, cap: number): CandidateFamily & { readonly counts: Uint32Array } {
-  const offsets: number[] = [0];
-  const nodes: number[] = [];
-  const counts: number[] = [];
-  const origins: number[] = [];
-  const masks: number[] = [];
-  for (let k = 0; k + 1 < family.offsets.length; ++k) {
-    let n = 0;
-    for (let t = family.offsets[k]!; t < family.offsets[k + 1]!; ++t) n += nodeCounts[family.nodes[t]!]!;
-    if (n < 1 || n > cap) continue;
-    for (let t = family.offsets[k]!; t < family.offsets[k + 1]!; ++t) nodes.push(family.nodes[t]!);
-    offsets.push(nodes.length);
-    counts.push(n);
-    if (family.origins && family.masks) {
-      origins.push(family.origins[k]!);
-      masks.push(family.masks[k]!);
-    }
-  }
-  const located = family.origins && family.masks ? { origins: Uint32Array.from(origins), masks: Uint16Array.from(masks) } : {};
-  return { offsets: Uint32Array.from(offsets), nodes: Uint32Array.from(nodes), counts: Uint32Array.from(counts), ...located };
 }
