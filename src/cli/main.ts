@@ -5,12 +5,15 @@ import { parseSweepArgs, sweepUsage } from "./parseSweepArgs.ts";
 import { runSweep } from "./runSweep.ts";
 import { explainUsage, parseExplainArgs } from "./parseExplainArgs.ts";
 import { runExplain } from "./runExplain.ts";
+import { hotspotsUsage, parseHotspotArgs } from "./parseHotspotArgs.ts";
+import { runHotspots } from "./runHotspots.ts";
 
-const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage };
+const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage, hotspots: hotspotsUsage };
 const topUsage = `shoal build DATA --out DIR [options]     one cover graph: nodes.csv, members.csv, edges.csv, summary.json
 shoal sweep DATA [--out FILE] [options]   the graph's figures at many radii, one CSV line per radius
 shoal explain DATA --nodes 3,4 [options]  what sets the rows of some nodes apart, one CSV line per column
-shoal help [build | sweep | explain]      the options of a command (also: shoal build --help)
+shoal hotspots DATA --scan COL --out DIR  where an outcome runs high or low, with p-values for the search
+shoal help [build | sweep | explain | hotspots]  the options of a command (also: shoal build --help)
 shoal --version                           the version`;
 
 /** The version in package.json. */
@@ -36,6 +39,9 @@ export async function main(args: readonly string[]): Promise<number> {
       case "explain":
         process.stdout.write(await runExplain(parseExplainArgs(rest)));
         return 0;
+      case "hotspots":
+        console.log(await runHotspots(parseHotspotArgs(rest)));
+        return 0;
       case "--version":
       case "-v":
       case "version":
@@ -47,7 +53,7 @@ export async function main(args: readonly string[]): Promise<number> {
       case "-h": {
         const topic = command === "help" ? rest[0] : undefined;
         if (topic !== undefined && !(topic in usages)) throw new Error(`unknown command: ${topic}`);
-        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}` : usages[topic]);
+        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}\n\n${hotspotsUsage}` : usages[topic]);
         return command === undefined ? 2 : 0;
       }
       default:

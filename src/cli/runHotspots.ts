@@ -1,0 +1,42 @@
+import { coverExports, scanHotspots } from "../core/index.ts";
+import { buildFromFile } from "./buildFromFile.ts";
+import { hotspotFileTexts } from "./hotspotSummary.ts";
+import type { HotspotCommand } from "./parseHotspotArgs.ts";
+import { writeFileSet } from "./writeFileSet.ts";
+
+/**
+ * `shoal hotspots`: builds as `shoal build` does (same reader, same four files), scans the
+ * --scan outcome for hotspots, and writes hotspots.csv, hotspot-rows.csv and hotspots.json beside
+ * them, the whole set replacing Shoal's previous files in the folder (`writeFileSet`).
+ */
+export async function runHotspots(command: HotspotCommand): Promise<string> {
+  const built = await buildFromFile(command);
+  const { table, fileName, fileSize, radius, result, reading, elapsed } = built;
+  const column = table.columns.find((c) => c.name === command.scan);
+  if (!column) throw new Error(`unknown column: ${command.scan}`);
+  if (column.kind !== "numeric") throw new Error(`not a numeric column: ${command.scan}`);
+  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading });
+  const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
+  const started = performance.now();
+  const scan = scanHotspots(table, result, {
+    outcome: command.scan,
+    direction: command.direction,
+    maxNodes: command.maxNodes,
+    replicates: command.replicates,
+    scanSeed: command.scanSeed,
+    stabilitySeeds: command.stabilitySeeds,
+    ...(command.score ? { score: command.score } : {}),
+    now: () => performance.now(),
+  });
+  const scanTime = performance.now() - started;
+  await writeFileSet(command.outDir, {
+    "nodes.csv": files["nodes.csv"],
+    "members.csv": files["members.csv"],
+    "edges.csv": files["edges.csv"],
+    "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
+    ...hotspotFileTexts(scan, table, { command, fileName, radius, buildMs: elapsed, scanMs: scanTime }),
+  });
+  const best = scan.hotspots[0];
+  const top = best ? `top hotspot: nodes ${Array.from(best.nodes, (n) => n + 1).join(" ")}, ${best.nInside} rows, ${best.inside} inside vs ${best.outside} outside, p ${best.p}` : (scan.notice ?? "no region scores above 0");
+  return `${scan.hotspots.length} hotspot${scan.hotspots.length === 1 ? "" : "s"} for ${command.scan} (${scan.score}, ${scan.search}, ${scan.candidateSets} candidate sets, ${scan.replicates} replicates) at radius ${radius}; ${top}; rows scanned ${scan.rowsScanned}, left out for a missing ${command.scan} ${scan.rowsMissingOutcome}; ${Math.round(scanTime)} ms; wrote ${command.outDir}`;
+}
