@@ -53,3 +53,9 @@ export function selectExpectedScanMs(s: WorkbenchState): number | null {
   const sets = selectCandidateSets(s);
   return sets === null ? null : expectedScanMs(sets, s.hotspotReplicates, s.hotspotStabilitySeeds, s.hotspotRate ?? assumedSetsPerMs);
 }
+
+/**
+ * True when the scan had nothing to find: every score is 0 (no cases or only cases for a 0/1
+ * outcome, or one value throughout), so every p is 1.
+ */
+export const isFlatScan = (scan: HotspotScan): boolean => scan.hotspots.every((h) => h.score === 0);
