@@ -1,5 +1,6 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { buildCover, countCandidateSets, scanHotspots, type HotspotOptions } from "../../src/core/index.ts";
+import type * as Core from "../../src/core/index.ts";
 import { createHandler, transferables } from "../../src/worker/handle.ts";
 import { lane, laneOf, type Answer, type Progress, type Request } from "../../src/worker/protocol.ts";
 import { fabricatedScan } from "../state/hotspotScanFixture.ts";
@@ -8,7 +9,7 @@ import { loadText, now } from "./answers.ts";
 // The engine lands separately: here its two entry points are stand-ins that record their arguments,
 // report progress and honour cancellation, so the test checks only the routing.
 vi.mock("../../src/core/index.ts", async (importOriginal) => {
-  const original = await importOriginal<typeof import("../../src/core/index.ts")>();
+  const original = await importOriginal<typeof Core>();
   return {
     ...original,
     scanHotspots: vi.fn((_parsed: unknown, _result: unknown, options: HotspotOptions) => {
