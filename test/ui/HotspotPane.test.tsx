@@ -26,12 +26,13 @@ async function showScan(scan: HotspotScan | null, candidateSets: number | null =
 const cells = (row: HTMLElement): string[] => within(row).getAllByRole("cell").map((c) => c.textContent ?? "");
 
 describe("hotspot pane", () => {
-  it("lists each hotspot: rank, 1-based nodes, rows, inside vs outside, the signed difference with its interval, p", async () => {
+  it("lists each hotspot: rank, rows, inside vs outside, the signed difference with its interval, p, and its 1-based nodes under it", async () => {
     await showScan(fabricatedScan());
     const [first, second] = screen.getAllByTestId("hotspot");
-    // fabricated figures: nodes 0 and 2 → "1 3"; p 0.001 and 0.4 as formatP writes them
-    expect(cells(first!).slice(0, 6)).toEqual(["1", "1 3", "3", "0.75 vs 0.125", "+0.625 (0.25 to 0.875)", "0.001"]);
-    expect(cells(second!).slice(0, 6)).toEqual(["2", "2", "2", "0.5 vs 0.25", "+0.25 (-0.125 to 0.5)", "0.4"]);
+    // fabricated figures; p 0.001 and 0.4 as formatP writes them
+    expect(cells(first!).slice(0, 5)).toEqual(["1", "3", "0.75 vs 0.125", "+0.625 (0.25 to 0.875)", "0.001"]);
+    expect(cells(second!).slice(0, 5)).toEqual(["2", "2", "0.5 vs 0.25", "+0.25 (-0.125 to 0.5)", "0.4"]);
+    expect(screen.getAllByTestId("hotspot-nodes").map((c) => c.textContent)).toEqual(["nodes 1 3", "nodes 2"]); // nodes 0, 2 and 1, 0-based
   });
 
   it("a p below 0.0001 reads '< 0.0001'", async () => {
@@ -67,10 +68,15 @@ describe("hotspot pane", () => {
     expect(screen.getByTestId("hotspot-flat").textContent).toBe("No cases or only cases among the scanned rows: every score is 0, p = 1.");
   });
 
-  it("shows seed stability only when it was run: 0.8 of 10 seeds reads '80% of 10 seeds'", async () => {
+  it("shows seed stability only when it was run: a share of 0.8 of 10 seeds reads '80%' under 'Seed stability (of 10)'", async () => {
     await showScan(fabricatedScan({ stabilitySeeds: 10 }, [{ seedShare: 0.8 }]));
-    expect(cells(screen.getByTestId("hotspot"))[6]).toBe("80% of 10 seeds");
-    expect(screen.getAllByRole("columnheader").map((h) => h.textContent)).toContain("Seed stability");
+    expect(cells(screen.getByTestId("hotspot"))[5]).toBe("80%");
+    expect(screen.getAllByRole("columnheader").map((h) => h.textContent)).toContain("Seed stability (of 10)");
+  });
+
+  it("without a seed-stability run there is no seed column", async () => {
+    await showScan(fabricatedScan());
+    expect(screen.getAllByRole("columnheader").map((h) => h.textContent)).toEqual(["Rank", "Rows", "Inside vs outside", "Difference (95% interval)", "p", "Region"]);
   });
 
   it("before a run shows the candidate count and the expected time: 40,000 sets × 1,000 scorings at 20,000 per ms is about 2 s (worked by hand)", async () => {

@@ -37,7 +37,7 @@ export function HotspotPane() {
       <p className="note" data-testid="hotspot-estimate">
         {candidateSets === null
           ? countFailed ? "The candidate regions could not be counted." : "Counting the candidate regions…"
-          : `${plural(candidateSets, "candidate set")} (K = ${maxNodes}), each scored for the data and ${formatCount(replicates)} permutations: ${roughDuration(expectedMs ?? 0)} expected (an estimate, ${measured ? "from the speed of the last scan" : "not yet timed on this machine"}).`}
+          : `${plural(candidateSets, "candidate set")} (K = ${maxNodes}), each scored for the data and ${formatCount(replicates)} permutations: ${roughDuration(expectedMs ?? 0)} expected (an estimate, ${measured ? "from the speed of an earlier scan" : "not yet timed on this machine"}).`}
       </p>
       <div className="stability-actions">
         <button type="button" onClick={() => void actions().runHotspotScan()} disabled={column === null || buildRunning || status.state === "running"}>
