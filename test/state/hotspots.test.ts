@@ -80,6 +80,13 @@ describe("hotspot actions", () => {
     expect(store.getState().hotspotScan).toMatchObject({ state: "idle", scan: null });
   });
 
+  it("a scan ends a running sweep's progress (the scan takes the compute lane, so the sweep will get no answer)", async () => {
+    const { store, actions } = await built();
+    store.setState({ stability: { state: "running", task: "sweep", fraction: 0.3, error: null } });
+    void actions.runHotspotScan();
+    expect(store.getState().stability).toEqual({ state: "idle", task: null, fraction: 0, error: null });
+  });
+
   it("a failed scan says why", async () => {
     const { store, actions, parking } = await built();
     const run = actions.runHotspotScan();

@@ -68,6 +68,16 @@ describe("hotspot pane", () => {
     expect(screen.getByTestId("hotspot-flat").textContent).toBe("No cases or only cases among the scanned rows: every score is 0, p = 1.");
   });
 
+  it("for a numeric outcome with one value throughout says every score is 0, p = 1", async () => {
+    await showScan(fabricatedScan({ score: "normal", outcome: "score" }, [{ score: 0, p: 1 }]));
+    expect(screen.getByTestId("hotspot-flat").textContent).toBe("score takes one value throughout the scanned rows: every score is 0, p = 1.");
+  });
+
+  it("says nothing about flat scores when the top hotspot scores above 0", async () => {
+    await showScan(fabricatedScan());
+    expect(screen.queryByTestId("hotspot-flat")).toBeNull();
+  });
+
   it("shows seed stability only when it was run: a share of 0.8 of 10 seeds reads '80%' under 'Seed stability (of 10)'", async () => {
     await showScan(fabricatedScan({ stabilitySeeds: 10 }, [{ seedShare: 0.8 }]));
     expect(cells(screen.getByTestId("hotspot"))[5]).toBe("80%");
