@@ -11,8 +11,7 @@ import type { WorkbenchState } from "./store.ts";
  */
 export const assumedSetsPerMs = 20_000;
 
-/** Replicates of each seed-stability run (the method). */
-const stabilityReplicates = 99;
+const stabilityReplicates = 99; // replicates per seed run of the seed stability (the engine's method, README)
 
 const memoNumericOutcomes = memoizeLast((table: ParsedTable | null, outcomes: readonly string[]) =>
   outcomes.filter((name) => table?.columns.find((c) => c.name === name)?.kind === "numeric"),

@@ -40,11 +40,11 @@ export interface HotspotSlice {
 
 export const initialHotspot: HotspotSlice = {
   hotspotColumn: null,
-  hotspotDirection: "high", // the default
-  hotspotMaxNodes: 8, // Tango & Takahashi's flexible scan; the default K
-  hotspotReplicates: 999, // common practice in scan statistics, no source
+  hotspotDirection: "high", // the scan's default (HotspotOptions)
+  hotspotMaxNodes: 8, // the scan's default K (HotspotOptions); Tango & Takahashi's flexible scan
+  hotspotReplicates: 999, // the scan's default (HotspotOptions); common practice in scan statistics, no source
   hotspotScore: "auto",
-  hotspotScanSeed: 1,
+  hotspotScanSeed: 1, // the scan's default (HotspotOptions)
   hotspotStabilitySeeds: 0,
   hotspotScan: { result: null, state: "idle", fraction: 0, scan: null, error: null, elapsedMs: null },
   hotspotEstimate: { result: null, maxNodes: 0, state: "idle", candidateSets: null },

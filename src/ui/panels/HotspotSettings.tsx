@@ -27,6 +27,8 @@ function WholeField({ id, label, lo, hi, initial, apply }: { id: string; label: 
   );
 }
 
+const fewestReplicates = 19; // the fewest at which p = 1/(R + 1) can reach 0.05 (worked by hand)
+
 /** What the scan looks for: the outcome, the direction, K, replicates, the score, the scan seed and the stability seeds. */
 export function HotspotSettings() {
   const columns = useWorkbench(selectHotspotColumns);
@@ -63,7 +65,7 @@ export function HotspotSettings() {
         </select>
       </label>
       <WholeField id="hotspot-k" label="Nodes per region at most (K)" lo={1} hi={15} initial={s.maxNodes} apply={(v) => ({ hotspotMaxNodes: v })} />
-      <WholeField id="hotspot-replicates" label="Replicates" lo={19} hi={99_999} initial={s.replicates} apply={(v) => ({ hotspotReplicates: v })} />
+      <WholeField id="hotspot-replicates" label="Replicates" lo={fewestReplicates} hi={99_999} initial={s.replicates} apply={(v) => ({ hotspotReplicates: v })} />
       <WholeField id="hotspot-scan-seed" label="Scan seed" lo={0} hi={2 ** 31 - 1} initial={s.scanSeed} apply={(v) => ({ hotspotScanSeed: v })} />
       <WholeField id="hotspot-stability-seeds" label="Stability seeds (0: skip)" lo={0} hi={100} initial={s.stabilitySeeds} apply={(v) => ({ hotspotStabilitySeeds: v })} />
     </fieldset>
