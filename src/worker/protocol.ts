@@ -76,8 +76,8 @@ export type Request =
   /** The exact number of candidate sets for K = maxNodes, counted before a scan starts (cheap: a view request). */
   | { readonly id: number; readonly type: "hotspotEstimate"; readonly result: CoverResult; readonly maxNodes: number };
 
-/** A hotspot scan's options as they cross to the worker: everything but the progress and cancel callbacks. */
-export type HotspotSettings = Omit<HotspotOptions, "onProgress" | "shouldStop">;
+/** A hotspot scan's options as they cross to the worker: everything but the callbacks (progress, cancel, a clock), which cannot be posted. */
+export type HotspotSettings = Omit<HotspotOptions, "onProgress" | "shouldStop" | "now">;
 
 export type RequestType = Request["type"];
 
