@@ -78,14 +78,7 @@ export function createHotspotActions(store: WorkbenchStore, env: HotspotEnvironm
       set({ hotspotScan: { ...idle, result, state: "failed", error: answerError(answer) } });
       return;
     }
-    const elapsedMs = env.now() - started;
-    const { candidateSets, replicates } = answer.scan;
-    const scored = candidateSets * (replicates + 1);
-    set({
-      hotspotScan: { result, state: "done", fraction: 1, scan: answer.scan, error: null, elapsedMs },
-      // the first timed scan of the session with a known cost sets the rate the estimates use
-      ...(now.hotspotRate === null && elapsedMs > 0 && scored > 0 && answer.scan.stabilitySeeds === 0 ? { hotspotRate: scored / elapsedMs } : {}),
-    });
+    set({ hotspotScan: { result, state: "done", fraction: 1, scan: answer.scan, error: null, elapsedMs: env.now() - started } });
   }
 
   return {

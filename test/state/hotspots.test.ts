@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createActions } from "../../src/state/actions.ts";
 import { createHotspotActions } from "../../src/state/hotspotActions.ts";
-import { assumedSetsPerMs, expectedScanMs, selectCandidateSets, selectExpectedScanMs, selectHotspotColumn, selectHotspotScan } from "../../src/state/hotspotSelectors.ts";
+import { bootstrapDrawsPerMs, expectedScanMs, selectCandidateSets, selectExpectedScanMs, selectHotspotColumn, selectHotspotScan, setsScoredPerMs } from "../../src/state/hotspotSelectors.ts";
 import { createWorkbenchStore } from "../../src/state/store.ts";
 import type { Answer, Request } from "../../src/worker/protocol.ts";
 import { assertClose } from "../assertClose.ts";
@@ -147,34 +147,36 @@ describe("hotspot actions", () => {
     expect(store.getState().regions).toEqual([]);
   });
 
-  it("the candidate count is kept for the build and K, and the expected time is sets × (replicates + 1) / the assumed rate", async () => {
+  it("the candidate count is kept for the build and K, and the expected time is sets × (replicates + 1) / rate plus the bootstrap's 8 rows × 2,000 × 10 draws / rate", async () => {
     const { store, actions, parking } = await built();
     const asked = actions.estimateHotspots();
     await parking.release("hotspotEstimate", (request) => ({ id: request.id, type: "hotspotEstimated", candidateSets: 40_000 }));
     await asked;
     expect(selectCandidateSets(store.getState())).toBe(40_000);
-    assertClose(selectExpectedScanMs(store.getState())!, (40_000 * 1000) / assumedSetsPerMs, { absolute: 0 }); // 999 replicates + the data (worked by hand)
+    assertClose(selectExpectedScanMs(store.getState())!, (40_000 * 1000) / setsScoredPerMs + (8 * 2000 * 10) / bootstrapDrawsPerMs); // 999 replicates + the data; all 8 rows used (worked by hand)
     void actions.setHotspotSettings({ hotspotMaxNodes: 10 }); // another K asks again (parked here): unknown until answered
     expect(selectCandidateSets(store.getState())).toBeNull();
   });
 
-  it("the first finished scan sets the rate: sets × (replicates + 1) / its wall time", async () => {
+  it("a finished scan keeps its wall time (5 ms: the stepping clock moves 5 ms per call, test support)", async () => {
     const { store, actions, parking } = await built();
     const run = actions.runHotspotScan();
     await parking.release("hotspots", scanned());
     await run;
-    const elapsed = store.getState().hotspotScan.elapsedMs!;
-    expect(elapsed).toBe(5); // the stepping clock moves 5 ms per call (test support)
-    assertClose(store.getState().hotspotRate!, (6 * 1000) / 5, { absolute: 0 }); // 6 fabricated sets × 1,000 scorings in 5 ms (worked by hand)
+    expect(store.getState().hotspotScan.elapsedMs).toBe(5);
   });
 });
 
 describe("expected scan time", () => {
-  it("expectedScanMs(1000, 999, 0, 20000) is 50 ms (worked by hand: 1,000 × 1,000 / 20,000)", () => {
-    expect(expectedScanMs(1000, 999, 0, 20000)).toBe(50);
+  it("3,700 sets × 1,000 scorings at 3,700 per ms is 1,000 ms (worked by hand)", () => {
+    expect(expectedScanMs({ candidateSets: 3700, replicates: 999, stabilitySeeds: 0, rows: 0 })).toBe(1000);
   });
 
-  it("each stability seed adds 100 scorings per set (99 replicates and the data): expectedScanMs(1000, 999, 10, 20000) is 100 ms (worked by hand)", () => {
-    expect(expectedScanMs(1000, 999, 10, 20000)).toBe(100);
+  it("each stability seed adds 100 scorings per set (99 replicates and the data): 10 seeds double the 1,000 ms to 2,000 ms (worked by hand)", () => {
+    expect(expectedScanMs({ candidateSets: 3700, replicates: 999, stabilitySeeds: 10, rows: 0 })).toBe(2000);
+  });
+
+  it("the bootstrap of 2,349 rows adds 2,349 × 2,000 × 10 / 100,000 = 469.8 ms (worked by hand)", () => {
+    assertClose(expectedScanMs({ candidateSets: 0, replicates: 999, stabilitySeeds: 0, rows: 2349 }), 469.8); // worked by hand
   });
 });

@@ -34,8 +34,6 @@ export interface HotspotSlice {
   readonly hotspotStabilitySeeds: number;
   readonly hotspotScan: HotspotScanStatus;
   readonly hotspotEstimate: HotspotEstimateStatus;
-  /** Candidate sets scored per millisecond (sets × (replicates + 1) / wall time), measured by the first finished scan of the session; null before it. */
-  readonly hotspotRate: number | null;
 }
 
 export const initialHotspot: HotspotSlice = {
@@ -48,5 +46,4 @@ export const initialHotspot: HotspotSlice = {
   hotspotStabilitySeeds: 0,
   hotspotScan: { result: null, state: "idle", fraction: 0, scan: null, error: null, elapsedMs: null },
   hotspotEstimate: { result: null, maxNodes: 0, state: "idle", candidateSets: null },
-  hotspotRate: null,
 };

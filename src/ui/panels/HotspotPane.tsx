@@ -21,7 +21,6 @@ export function HotspotPane() {
   const column = useWorkbench(selectHotspotColumn);
   const candidateSets = useWorkbench(selectCandidateSets);
   const expectedMs = useWorkbench(selectExpectedScanMs);
-  const measured = useWorkbench((s) => s.hotspotRate !== null);
   const countFailed = useWorkbench((s) => s.hotspotEstimate.state === "failed" && s.hotspotEstimate.result === s.result);
   const status = useWorkbench((s) => s.hotspotScan);
   const buildRunning = useWorkbench((s) => s.build.state === "running");
@@ -37,7 +36,7 @@ export function HotspotPane() {
       <p className="note" data-testid="hotspot-estimate">
         {candidateSets === null
           ? countFailed ? "The candidate regions could not be counted." : "Counting the candidate regions…"
-          : `${plural(candidateSets, "candidate set")} (K = ${maxNodes}), each scored for the data and ${formatCount(replicates)} permutations: ${roughDuration(expectedMs ?? 0)} expected (an estimate, ${measured ? "from the speed of an earlier scan" : "not yet timed on this machine"}).`}
+          : `${plural(candidateSets, "candidate set")} (K = ${maxNodes}), each scored for the data and ${formatCount(replicates)} permutations: ${roughDuration(expectedMs ?? 0)} expected (an estimate from rates measured once on the demo table).`}
       </p>
       <div className="stability-actions">
         <button type="button" onClick={() => void actions().runHotspotScan()} disabled={column === null || buildRunning || status.state === "running"}>
