@@ -61,6 +61,7 @@ describe("hotspot pane", () => {
     await showScan(fabricatedScan({ search: "heuristic", candidateSets: 5_000_000 }, [{ search: "heuristic" }]));
     expect(cells(screen.getByTestId("hotspot"))[0]).toBe("1 heuristic");
     expect(screen.getByTestId("hotspot-rows").textContent).toContain("The 5,000,000 candidate sets passed the budget, so a heuristic search ran, the same one inside every permutation.");
+    expect(screen.getByTestId("hotspot-accounting").textContent).toContain("the search over all candidate regions (the same heuristic search in every permutation) at this radius");
   });
 
   it("with no cases or only cases says every score is 0, p = 1", async () => {

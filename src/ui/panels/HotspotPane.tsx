@@ -52,7 +52,7 @@ export function HotspotPane() {
       )}
       {status.state === "failed" && <p role="alert" className="error">The scan failed: {status.error}</p>}
       <p className="region-caution" data-testid="hotspot-accounting">
-        The p-value accounts for the search over all candidate regions at this radius ({formatNumber(params.radius)}), metric ({params.metric}) and scaling ({params.scale}); it does not account for choosing those parameters, nor for looking at several outcomes.
+        The p-value accounts for the search over all candidate regions{scan?.search === "heuristic" ? " (the same heuristic search in every permutation)" : ""} at this radius ({formatNumber(params.radius)}), metric ({params.metric}) and scaling ({params.scale}); it does not account for choosing those parameters, nor for looking at several outcomes.
       </p>
       {scan && (
         <>
