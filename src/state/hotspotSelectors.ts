@@ -4,13 +4,14 @@ import { selectOutcomeNames } from "./selectors.ts";
 import type { WorkbenchState } from "./store.ts";
 
 /**
- * Rates for the expected time of a scan: estimates, measured once (the engine's own timings of
- * `shoal hotspots` on the demo table, K = 8, 999 replicates, Node 20 on a shared 2-core machine:
- * 992 candidate sets × 1,000 scorings in 265 ms; bootstrap of 10 hotspots × 2,000 resamples ×
- * 2,349 rows in 457 ms). Another machine, table or K may run faster or slower.
+ * Rates for the expected time of a scan: estimates, measured once from the engine's own timings of
+ * `shoal hotspots` on the demo table (K = 8, Node 20 on a shared 2-core machine): with 19,999
+ * replicates, 992 candidate sets × 20,000 scorings took 2,357 ms (warm; 999 replicates run at
+ * about half that speed while the code warms up); the intervals, 10 hotspots × 2,000 resamples ×
+ * 2,349 rows, took 471 ms. Another machine, table or K may run faster or slower.
  */
-export const setsScoredPerMs = 3_700; // 992 × 1,000 / 265, rounded down (measured once, see above)
-export const bootstrapDrawsPerMs = 100_000; // 10 × 2,000 × 2,349 / 457 ≈ 102,800, rounded down (measured once, see above)
+export const setsScoredPerMs = 8_400; // 992 × 20,000 / 2,357 ≈ 8,418, rounded down (measured once, see above)
+export const bootstrapDrawsPerMs = 100_000; // 10 × 2,000 × 2,349 / 471 ≈ 99,700, rounded (measured once, see above)
 const bootstrapResamples = 2_000; // the engine's percentile bootstrap (README)
 const reportedHotspots = 10; // at most this many hotspots get an interval (README)
 const stabilityReplicates = 99; // replicates per seed run of the seed stability (the engine's method, README)
@@ -44,7 +45,7 @@ export const selectCandidateSets = (s: WorkbenchState): number | null =>
  * seed's run (99 each; the seed rebuilds are left out); the intervals draw every scanned row
  * 2,000 times for each of at most 10 hotspots:
  *   sets × (replicates + 1 + k × (99 + 1)) / setsScoredPerMs + rows × 2,000 × 10 / bootstrapDrawsPerMs
- * @example expectedScanMs({ candidateSets: 3700, replicates: 999, stabilitySeeds: 0, rows: 0 }) // => 1000
+ * @example expectedScanMs({ candidateSets: 8400, replicates: 999, stabilitySeeds: 0, rows: 0 }) // => 1000
  */
 export function expectedScanMs({ candidateSets, replicates, stabilitySeeds, rows }: { candidateSets: number; replicates: number; stabilitySeeds: number; rows: number }): number {
   const scorings = candidateSets * (replicates + 1 + stabilitySeeds * (stabilityReplicates + 1));
