@@ -3,6 +3,7 @@ import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
 import type { Answer, TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
+import { createHotspotActions, type HotspotActions } from "./hotspotActions.ts";
 import { createRegionActions } from "./regionActions.ts";
 import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
@@ -117,7 +118,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     if (store.getState().stability.state === "running") set({ stability: idleStability });
     set({ build: { state: "running", phase: null, fraction: 0, error: null, elapsedMs: null } });
     const answer = await env.client.send({ type: "build", params }, (progress) => {
-      if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds" || progress.phase === "region") return;
+      if (ticket !== latestBuild || progress.phase === "parse" || progress.phase === "suggest" || progress.phase === "sweep" || progress.phase === "seeds" || progress.phase === "region" || progress.phase === "hotspots") return;
       set({ build: { ...store.getState().build, phase: progress.phase, fraction: progress.fraction } });
     });
     mark(answer.type === "cancelled" ? "shoal:build-cancelled" : "shoal:build-answered");
@@ -354,10 +355,10 @@ function mark(name: string): void {
   globalThis.performance?.mark?.(name);
 }
 
-let appActions: (Actions & RegionPaneActions) | null = null;
+let appActions: (Actions & RegionPaneActions & HotspotActions) | null = null;
 
-/** Actions bound to the application's store and a worker, created on first use (the region pane's composed in). */
-export function actions(): Actions & RegionPaneActions {
+/** Actions bound to the application's store and a worker, created on first use (the region pane's and the hotspot pane's composed in). */
+export function actions(): Actions & RegionPaneActions & HotspotActions {
   if (appActions) return appActions;
   const env: ActionEnvironment = {
     client: createWorkerClient(),
@@ -369,6 +370,7 @@ export function actions(): Actions & RegionPaneActions {
     now: () => performance.now(),
   };
   const base = createActions(workbenchStore, env);
-  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource) };
+  const hotspots = createHotspotActions(workbenchStore, { ...env, takeRegionId: () => nextRegionId++ });
+  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots };
   return appActions;
 }

@@ -1,5 +1,6 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
 import { initialData, type DataSlice } from "./slices/dataSlice.ts";
+import { initialHotspot, type HotspotSlice } from "./slices/hotspotSlice.ts";
 import { initialParams, type ParamsSlice } from "./slices/paramsSlice.ts";
 import { initialRegionPane, type RegionPaneSlice } from "./slices/regionPaneSlice.ts";
 import { initialResult, type ResultSlice } from "./slices/resultSlice.ts";
@@ -7,10 +8,10 @@ import { initialSelection, type SelectionSlice } from "./slices/selectionSlice.t
 import { initialStability, type StabilitySlice } from "./slices/stabilitySlice.ts";
 
 /** Inputs (table, parameters, selection) and the latest result; nothing derivable from them. */
-export type WorkbenchState = DataSlice & ParamsSlice & ResultSlice & SelectionSlice & StabilitySlice & RegionPaneSlice;
+export type WorkbenchState = DataSlice & ParamsSlice & ResultSlice & SelectionSlice & StabilitySlice & RegionPaneSlice & HotspotSlice;
 export type WorkbenchStore = StoreApi<WorkbenchState>;
 
-export const initialState: WorkbenchState = { ...initialData, ...initialParams, ...initialResult, ...initialSelection, ...initialStability, ...initialRegionPane };
+export const initialState: WorkbenchState = { ...initialData, ...initialParams, ...initialResult, ...initialSelection, ...initialStability, ...initialRegionPane, ...initialHotspot };
 
 export function createWorkbenchStore(): WorkbenchStore {
   return createStore<WorkbenchState>()(() => initialState);

@@ -1,6 +1,7 @@
 import {
   buildCover,
   Cancelled,
+  countCandidateSets,
   coverExports,
   figureBuffers,
   isCancelled,
@@ -8,6 +9,7 @@ import {
   readTableBytes,
   readTableText,
   regionStability,
+  scanHotspots,
   seedStability,
   defaultRadius,
   type ByteSource,
@@ -125,6 +127,12 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
         case "regionRows":
           return regionRowsAnswer(loaded(), request, { onProgress: (fraction) => progress("region", fraction), shouldStop: () => isStopped(request) })
             .catch((error: unknown) => failure(request.id, error));
+        case "hotspots": {
+          const scan = scanHotspots(loaded(), request.result, { ...request.options, onProgress: (fraction) => progress("hotspots", fraction), shouldStop: () => isStopped(request) });
+          return { id: request.id, type: "hotspotsScanned", scan };
+        }
+        case "hotspotEstimate":
+          return { id: request.id, type: "hotspotEstimated", candidateSets: countCandidateSets(loaded(), request.result, request.maxNodes) };
         default:
           return assertNever(request);
       }
@@ -160,6 +168,8 @@ export function transferables(answer: Answer): ArrayBuffer[] {
   }
   if (answer.type === "zipped") return [answer.bytes.buffer as ArrayBuffer];
   if (answer.type === "regionTabled") return [...new Set(answer.curves.flatMap((c) => [c.inside.buffer as ArrayBuffer, c.outside.buffer as ArrayBuffer]))];
+  // a view into shared memory (the table's, say) cannot be transferred: it is copied
+  if (answer.type === "hotspotsScanned") return [...new Set(answer.scan.hotspots.flatMap((h) => [h.nodes.buffer, h.rows.buffer]))].filter((b): b is ArrayBuffer => b instanceof ArrayBuffer);
   if (answer.type === "seeded") return answer.stability.regionShare ? [answer.stability.regionShare.buffer as ArrayBuffer] : [];
   if (answer.type !== "built") return [];
   const { result } = answer;

@@ -5,6 +5,8 @@ import type {
   ColumnSummary,
   CoverResult,
   ExportContext,
+  HotspotOptions,
+  HotspotScan,
   ParsedTable,
   RadiusBasis,
   Region,
@@ -32,7 +34,7 @@ export interface SweepRange {
 
 /**
  * Requests from the main thread. Each carries an increasing id; the answer repeats it.
- * "Compute" requests (builds, default radius, sweeps, seed runs) share one lane: a newer one cancels the older.
+ * "Compute" requests (builds, default radius, sweeps, seed runs, hotspot scans) share one lane: a newer one cancels the older.
  */
 export type Request =
   | { readonly id: number; readonly type: "load"; readonly source: TableSource; readonly options: ByteReadOptions }
@@ -68,7 +70,14 @@ export type Request =
       readonly format: TableFormat;
       readonly encoding: TextEncodingName | null;
       readonly regions: readonly Region[];
-    };
+    }
+  /** Outcome hotspots of a build on the worker's table (a compute request: progress, Cancel). */
+  | { readonly id: number; readonly type: "hotspots"; readonly result: CoverResult; readonly options: HotspotSettings }
+  /** The exact number of candidate sets for K = maxNodes, counted before a scan starts (cheap: a view request). */
+  | { readonly id: number; readonly type: "hotspotEstimate"; readonly result: CoverResult; readonly maxNodes: number };
+
+/** A hotspot scan's options as they cross to the worker: everything but the callbacks (progress, cancel, a clock), which cannot be posted. */
+export type HotspotSettings = Omit<HotspotOptions, "onProgress" | "shouldStop" | "now">;
 
 export type RequestType = Request["type"];
 
@@ -78,7 +87,7 @@ export type RequestType = Request["type"];
  */
 export const lane = { compute: 0, load: 1, view: 2 } as const;
 export const laneOf = (type: RequestType): number =>
-  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" || type === "regionTable" || type === "regionRows" ? lane.view : lane.compute;
+  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" || type === "regionTable" || type === "regionRows" || type === "hotspotEstimate" ? lane.view : lane.compute;
 
 /** One column's statistics over a node's member rows. */
 export interface NodeColumnStats {
@@ -111,6 +120,8 @@ export type Answer =
   | { readonly id: number; readonly type: "zipped"; readonly bytes: Uint8Array }
   | { readonly id: number; readonly type: "regionTabled"; readonly table: RegionTable; readonly curves: readonly RegionCurve[] }
   | { readonly id: number; readonly type: "regionRowsWritten"; readonly csv: string }
+  | { readonly id: number; readonly type: "hotspotsScanned"; readonly scan: HotspotScan }
+  | { readonly id: number; readonly type: "hotspotEstimated"; readonly candidateSets: number }
   | { readonly id: number; readonly type: "cancelled" }
   | { readonly id: number; readonly type: "failed"; readonly message: string };
 
@@ -118,7 +129,7 @@ export type Answer =
 export interface Progress {
   readonly id: number;
   readonly type: "progress";
-  readonly phase: BuildPhase | "parse" | "suggest" | "sweep" | "seeds" | "region";
+  readonly phase: BuildPhase | "parse" | "suggest" | "sweep" | "seeds" | "region" | "hotspots";
   readonly fraction: number;
 }
 

@@ -1,4 +1,5 @@
 import { useState, type KeyboardEvent } from "react";
+import { HotspotPane } from "./HotspotPane.tsx";
 import { NodeList } from "./NodeList.tsx";
 import { NodePane } from "./NodePane.tsx";
 import { RegionPane } from "./RegionPane.tsx";
@@ -8,9 +9,10 @@ const tabs = [
   { id: "node", label: "Node" },
   { id: "region", label: "Region" },
   { id: "stability", label: "Stability" },
+  { id: "hotspots", label: "Hotspots" },
 ] as const;
 
-/** The side pane: the open node's members, what sets the region apart, or the stability evidence; tabs move with arrow keys. */
+/** The side pane: the open node's members, what sets the region apart, the stability evidence, or the outcome hotspots; tabs move with arrow keys. */
 export function InspectorTabs() {
   const [active, setActive] = useState<(typeof tabs)[number]["id"]>("node");
   const onKey = (event: KeyboardEvent<HTMLDivElement>): void => {
@@ -45,8 +47,10 @@ export function InspectorTabs() {
           </>
         ) : active === "region" ? (
           <RegionPane />
-        ) : (
+        ) : active === "stability" ? (
           <StabilityPane />
+        ) : (
+          <HotspotPane />
         )}
       </div>
     </>
