@@ -9,7 +9,7 @@ import { hotspotsUsage, parseHotspotArgs } from "./parseHotspotArgs.ts";
 import { runHotspots } from "./runHotspots.ts";
 
 const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage, hotspots: hotspotsUsage };
-const topUsage = `shoal build DATA --out DIR [options]     one cover graph: nodes.csv, members.csv, edges.csv, summary.json
+export const topUsage = `shoal build DATA --out DIR [options]     one cover graph: nodes.csv, members.csv, edges.csv, summary.json
 shoal sweep DATA [--out FILE] [options]   the graph's figures at many radii, one CSV line per radius
 shoal explain DATA --nodes 3,4 [options]  what sets the rows of some nodes apart, one CSV line per column
 shoal hotspots DATA --scan COL --out DIR  where an outcome runs high or low, with p-values for the search
@@ -45,16 +45,19 @@ export async function main(args: readonly string[]): Promise<number> {
       case "--version":
       case "-v":
       case "version":
+        if (rest[0] !== undefined) throw new Error(`unexpected argument: ${rest[0]}`);
         console.log(`shoal ${version()}`);
         return 0;
       case undefined:
+        console.error(topUsage);
+        return 2;
       case "help":
       case "--help":
       case "-h": {
         const topic = command === "help" ? rest[0] : undefined;
         if (topic !== undefined && !(topic in usages)) throw new Error(`unknown command: ${topic}`);
         console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}\n\n${hotspotsUsage}` : usages[topic]);
-        return command === undefined ? 2 : 0;
+        return 0;
       }
       default:
         throw new Error(`unknown command: ${command}`);

@@ -31,8 +31,8 @@ export async function runBuild(command: BuildCommand): Promise<string> {
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
     ...regionFiles,
   });
-  const loops = result.betti ? `, b0 ${result.betti.b0}, b1 ${result.betti.b1}` : "";
+  const loops = result.betti ? `, b1 ${result.betti.b1}` : "";
   const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? "" : "s"}`;
   const region = regions[0] ? `; region ${regions[0].name}: ${count(regions[0].rows.length, "row")}` : "";
-  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")}, cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}${region}; wrote ${command.outDir}`;
+  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")} (b0), cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}${region}; wrote ${command.outDir}`;
 }

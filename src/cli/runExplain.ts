@@ -15,12 +15,16 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
   const region = chosenRows(command.region, result);
   const versus = command.versus ? chosenRows(command.versus, result) : undefined;
   const sides = regionSides(result.rowsRead, result.usedRows, region, versus);
+  if (versus && (sides.inside.length === 0 || sides.outside.length === 0)) {
+    const empty = sides.inside.length === 0 ? (sides.outside.length === 0 ? "both sides are" : "the first set is") : "the second set is";
+    throw new Error(`${empty} empty after leaving out the ${rows(sides.inBoth)} in both sets`);
+  }
   const explained = regionTable(table, sides, { labelColumn: command.idColumn });
   const csv = regionTableCsv(explained);
   const notes = [
-    `${explained.rowsInside} rows inside, ${explained.rowsOutside} ${command.versus ? "in the second set" : "outside"}`,
-    ...(explained.inBoth > 0 ? [`${explained.inBoth} rows in both left out`] : []),
-    `${explained.rowsUnused} rows left out of the build${explained.regionRowsUnused > 0 ? ` (${explained.regionRowsUnused} of them chosen)` : ""}`,
+    `${rows(explained.rowsInside)} inside, ${explained.rowsOutside} ${command.versus ? "in the second set" : "outside"}`,
+    ...(explained.inBoth > 0 ? [`${rows(explained.inBoth)} in both left out`] : []),
+    `${rows(explained.rowsUnused)} left out of the build${explained.regionRowsUnused > 0 ? ` (${explained.regionRowsUnused} of them chosen)` : ""}`,
     ...flagged(explained),
     ...(explained.skipped.length > 0 ? [`not tested: ${explained.skipped.map((s) => `${s.column} (${s.reason})`).join(", ")}`] : []),
   ].join("; ");
@@ -31,6 +35,8 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
   await writeFileWhole(command.outFile, csv);
   return `${explained.lines.length} columns compared; ${notes}; wrote ${command.outFile}\n`;
 }
+
+const rows = (n: number): string => `${n} ${n === 1 ? "row" : "rows"}`;
 
 // The CSV has no column for it, so the note names the chi-squared lines whose approximation is poor.
 function flagged(table: RegionTable): string[] {

@@ -4,7 +4,7 @@ import type { SweepCommand } from "./parseSweepArgs.ts";
 import { readInput } from "./readInput.ts";
 import { writeFileWhole } from "./writeFileWhole.ts";
 
-export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1", "cycle_rank", "balls_per_row", "largest_node_share", "largest_component_share", "plateau", "plateau_middle"];
+export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1", "cycle_rank", "nodes_per_row", "largest_node_share", "largest_component_share", "plateau", "plateau_middle"];
 
 /**
  * Runs a radius sweep over the table and returns the text for standard output: the per-radius
@@ -23,15 +23,16 @@ export async function runSweep(command: SweepCommand): Promise<string> {
   if (command.outFile === null) return csv;
   await writeFileWhole(command.outFile, csv);
   const { suggestion } = sweep;
-  const suggested = suggestion ? `suggested radius ${suggestion.radius} (b0 ${suggestion.plateau.b0}, b1 ${suggestion.plateau.b1})` : "no suggested radius";
-  return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${suggested}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;
+  const middle = suggestion ? `plateau middle ${suggestion.radius} (b0 ${suggestion.plateau.b0}, b1 ${suggestion.plateau.b1})` : "no plateau middle";
+  return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${middle}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;
 }
 
 /**
  * The per-radius table: one line per radius, ascending. `components` counts the connected
  * components of the graph, which is b0 of its nerve: both columns are kept, so a reader of either
  * name finds it. `plateau` numbers the runs of unchanged b0, b1 from 1 (0 outside a run);
- * `plateau_middle` is 1 on the suggested radius, the middle of the widest eligible plateau.
+ * `nodes_per_row` is the average number of nodes a row belongs to; `plateau_middle` is 1 on the
+ * plateau middle, the middle of the widest eligible plateau.
  */
 export function sweepCsv(sweep: RadiusSweep): string {
   const f = sweep.figures;

@@ -3,9 +3,10 @@ import { parseArgs } from "node:util";
 type StringOptions = Record<string, { type: "string"; default?: string }>;
 
 /**
- * node:util parseArgs in strict mode, with two fixes for a command line: a value that starts
- * with "-" followed by a digit ("--radius -1") is taken as the option's value, not as an option,
- * and parser errors become one lowercase line.
+ * node:util parseArgs in strict mode, with fixes for a command line: a value that starts with "-"
+ * followed by a digit ("--radius -1") is taken as the option's value, not as an option; an option
+ * given twice is an error naming it; and parser errors become one lowercase line
+ * ("unknown option: --x", "missing value for --out").
  */
 export function strictArgs(args: readonly string[], options: StringOptions): { values: Record<string, string | undefined>; positionals: string[] } {
   const joined: string[] = [];
@@ -17,12 +18,21 @@ export function strictArgs(args: readonly string[], options: StringOptions): { v
       k++;
     } else joined.push(token);
   }
+  let parsed: ReturnType<typeof parseArgs<{ args: string[]; allowPositionals: true; strict: true; options: StringOptions; tokens: true }>>;
   try {
-    const { values, positionals } = parseArgs({ args: joined, allowPositionals: true, strict: true, options });
-    return { values: values as Record<string, string | undefined>, positionals };
+    parsed = parseArgs({ args: joined, allowPositionals: true, strict: true, options, tokens: true });
   } catch (error) {
     const message = error instanceof Error ? error.message.split("\n")[0]! : String(error);
     const unknown = /Unknown option '([^']+)'/.exec(message);
-    throw new Error(unknown ? `unknown option: ${unknown[1]}` : message.charAt(0).toLowerCase() + message.slice(1), { cause: error });
+    const missing = /Option '(--[^ ']+)[^']*' argument missing/.exec(message);
+    throw new Error(unknown ? `unknown option: ${unknown[1]}` : missing ? `missing value for ${missing[1]}` : message.charAt(0).toLowerCase() + message.slice(1), { cause: error });
   }
+  // parseArgs keeps the last of a repeated option; two values for one setting is more likely a slip
+  const seen = new Set<string>();
+  for (const token of parsed.tokens) {
+    if (token.kind !== "option") continue;
+    if (seen.has(token.name)) throw new Error(`--${token.name} given twice`);
+    seen.add(token.name);
+  }
+  return { values: parsed.values as Record<string, string | undefined>, positionals: parsed.positionals };
 }

@@ -5,6 +5,7 @@ import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
 import { createHotspotActions, type HotspotActions } from "./hotspotActions.ts";
 import { createRegionActions } from "./regionActions.ts";
+import { firstFreeRegionName, renameRefusal } from "./regionNames.ts";
 import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
@@ -244,14 +245,17 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const rows = selectRegionRows(s);
       if (!rows || rows.length === 0) return null;
       const id = nextRegionId++;
-      const region: NamedRegion = { id, name: `Region ${regionLetters(s.regions.length)}`, rows };
+      const region: NamedRegion = { id, name: firstFreeRegionName(s.regions), rows };
       set({ regions: [...s.regions, region], activeRegionId: id });
       return region;
     },
-    renameRegion(id: number, name: string): void {
+    /** Renames a region; returns why not (empty, or another region's name) and leaves it unchanged, else null. */
+    renameRegion(id: number, name: string): string | null {
       const trimmed = name.trim();
-      if (trimmed === "") return;
-      set({ regions: store.getState().regions.map((r) => (r.id === id ? { ...r, name: trimmed } : r)) });
+      const { regions } = store.getState();
+      const refusal = renameRefusal(regions, id, trimmed);
+      if (refusal === null) set({ regions: regions.map((r) => (r.id === id ? { ...r, name: trimmed } : r)) });
+      return refusal;
     },
     deleteRegion(id: number): void {
       const s = store.getState();
@@ -338,13 +342,6 @@ const answerError = (answer: Answer): string =>
   answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
 
 let nextRegionId = 1;
-
-/** Bijective base-26 letters: 0 → A, 25 → Z, 26 → AA. */
-export function regionLetters(index: number): string {
-  let name = "";
-  for (let k = index + 1; k > 0; k = Math.floor((k - 1) / 26)) name = String.fromCharCode(65 + ((k - 1) % 26)) + name;
-  return name;
-}
 
 const cancelledNotice = (fileName: string): string => `reading ${fileName} was cancelled; the table shown is unchanged`;
 

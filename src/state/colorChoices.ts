@@ -1,6 +1,6 @@
-import { nodeMajority, nodeLevelShare, nodeRowShare, numericLevels, type CoverResult, type ParsedTable } from "../core/index.ts";
+import { nodeRowShare, numericLevels, type CoverResult, type ParsedTable } from "../core/index.ts";
 import { memoizeLast } from "./memoizeLast.ts";
-import type { NodeFill } from "./nodeFill.ts";
+import { levelFill, type NodeFill } from "./nodeFill.ts";
 import type { NamedRegion } from "./slices/selectionSlice.ts";
 import type { WorkbenchState } from "./store.ts";
 
@@ -32,10 +32,7 @@ export function specialFill(
     const name = colorBy.slice(levelsPrefix.length);
     const column = table?.columns.find((c) => c.name === name);
     const categories = column?.kind === "numeric" ? numericLevels(column.numbers) : null;
-    if (!categories) return null;
-    const index = colorLevel === null ? -1 : categories.levels.indexOf(colorLevel);
-    if (index >= 0) return { kind: "sequential", values: nodeLevelShare(categories, result.members, index), caption: `node share of ${name} = ${colorLevel}` };
-    return { kind: "categorical", level: nodeMajority(categories, result.members), levels: categories.levels, caption: `most common ${name} in the node` };
+    return categories ? levelFill(categories, result.members, name, colorLevel) : null;
   }
   return undefined;
 }

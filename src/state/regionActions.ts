@@ -44,7 +44,7 @@ export function createRegionActions(store: WorkbenchStore) {
     selectRegionNodes(id: number): void {
       const s = store.getState();
       const region = s.regions.find((r) => r.id === id);
-      if (s.result && region) selectNodes(majorityNodes(s.result.members, region.rows));
+      if (s.result && region) selectNodes(majorityNodes(s.result.members, region.rows, s.result.rowsRead));
     },
     /** Looks a row up by label or 1-based record number; an empty query ends the search. */
     findRow(query: string, mode: FindMode): void {

@@ -26,7 +26,7 @@ export interface RegionOutline {
 }
 
 const memoOutlines = memoizeLast((result: WorkbenchState["result"], regions: readonly NamedRegion[]): readonly RegionOutline[] =>
-  result ? regions.map((region, style) => ({ id: region.id, style, nodes: majorityNodes(result.members, region.rows) })) : [],
+  result ? regions.map((region, style) => ({ id: region.id, style, nodes: majorityNodes(result.members, region.rows, result.rowsRead) })) : [],
 );
 
 /** Outlines of every region on the current build, in the order the regions were kept. */

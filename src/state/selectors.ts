@@ -1,16 +1,14 @@
 import {
   featureWeights,
-  nodeLevelShare,
-  nodeMajority,
   nodeMeans,
-  nodeMembers,
+  nodeRows,
   type ColumnSummary,
   type CoverParams,
   type ParsedTable,
 } from "../core/index.ts";
 import { specialFill } from "./colorChoices.ts";
 import { memoizeLast } from "./memoizeLast.ts";
-import type { NodeFill } from "./nodeFill.ts";
+import { levelFill, type NodeFill } from "./nodeFill.ts";
 
 /** Colour column name that stands for the seed-stability share of each row (not a table column). */
 export const stabilityColor = "@membership-stability";
@@ -65,10 +63,7 @@ const memoFill = memoizeLast(
     const source = table?.columns.find((c) => c.name === column);
     if (!source) return null;
     if (source.kind === "numeric") return { kind: "sequential", values: nodeMeans(source.numbers, result.members), caption: `node mean of ${source.name}` };
-    if (!source.categories) return null;
-    const index = level === null ? -1 : source.categories.levels.indexOf(level);
-    if (index >= 0) return { kind: "sequential", values: nodeLevelShare(source.categories, result.members, index), caption: `node share of ${source.name} = ${level}` };
-    return { kind: "categorical", level: nodeMajority(source.categories, result.members), levels: source.categories.levels, caption: `most common ${source.name} in the node` };
+    return source.categories ? levelFill(source.categories, result.members, source.name, level) : null;
   },
 );
 
@@ -124,9 +119,7 @@ export const selectStatsColumns = (s: WorkbenchState): string[] =>
 
 const memoRegionRows = memoizeLast((result: WorkbenchState["result"], selection: readonly number[]): Uint32Array | null => {
   if (!result || selection.length === 0) return null;
-  const rows = new Set<number>();
-  for (const node of selection) if (node < result.landmarks.length) for (const row of nodeMembers(result.members, node)) rows.add(row);
-  return Uint32Array.from([...rows].sort((a, b) => a - b));
+  return nodeRows(result.members, selection.filter((node) => node < result.landmarks.length));
 });
 
 /** Parsed-table rows of the region (the union of its nodes' members), or null when no region is selected. */

@@ -7,7 +7,8 @@ export interface WorkerClient {
   /**
    * Sends a request; progress reports arrive through `onProgress` until the answer resolves.
    * A compute request (a build, default radius, sweep or seed run) cancels every older compute request still running
-   * or queued: the newest wins, and the older answer is `cancelled`.
+   * or queued: the newest wins, and the older answer is `cancelled`. A region table likewise cancels older region tables
+   * (and nothing else: node statistics and exports run to the end).
    */
   send(body: RequestBody, onProgress?: (progress: Progress) => void): Promise<Answer>;
   /** Cancels the running and queued requests of a lane (the load's Cancel button). */
@@ -118,7 +119,8 @@ export function createWorkerClient(): WorkerClient {
   return {
     send(body, onProgress) {
       const request = { ...body, id: nextId++ } as Request;
-      if (laneOf(request.type) === lane.compute) stopLane(lane.compute, request.id - 1);
+      const slot = laneOf(request.type);
+      if (slot === lane.compute || slot === lane.region) stopLane(slot, request.id - 1);
       return new Promise<Answer>((resolve) => {
         const entry = { request, resolve, onProgress };
         pending.set(request.id, entry);

@@ -83,11 +83,12 @@ export type RequestType = Request["type"];
 
 /**
  * Lanes of cancellation: index into the shared cancel flags. "view" requests (node statistics,
- * the export) read the table for what is on screen: they neither cancel nor are cancelled by a build.
+ * the exports) read the table for what is on screen: they neither cancel nor are cancelled by a build.
+ * Region tables have a lane of their own, where (as in "compute") a newer request cancels the older.
  */
-export const lane = { compute: 0, load: 1, view: 2 } as const;
+export const lane = { compute: 0, load: 1, view: 2, region: 3 } as const;
 export const laneOf = (type: RequestType): number =>
-  type === "load" || type === "adopt" ? lane.load : type === "nodeStats" || type === "exportZip" || type === "regionTable" || type === "regionRows" || type === "hotspotEstimate" ? lane.view : lane.compute;
+  type === "load" || type === "adopt" ? lane.load : type === "regionTable" ? lane.region : type === "nodeStats" || type === "exportZip" || type === "regionRows" || type === "hotspotEstimate" ? lane.view : lane.compute;
 
 /** One column's statistics over a node's member rows. */
 export interface NodeColumnStats {

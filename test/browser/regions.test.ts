@@ -4,7 +4,7 @@ import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
 import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // Regions as a person makes them on the demo: lasso nodes on the canvas, keep them, find a row,
-// rebuild at another radius. Node centres come from the page's read-only probe, window.shoalGraph
+// rebuild at another radius. Node centres come from the page's read-only probe, window.shoalGraph (opened with ?probe)
 // (src/ui/graph/graphProbe.ts), in CSS pixels of the canvas.
 
 const session = useBrowserSession();
@@ -40,7 +40,7 @@ async function dragLasso(page: Page, polygon: readonly Point[], shift = false): 
 it("demo: a lasso selects the nodes whose centres lie inside it, shift-lasso adds, and two kept regions survive a rebuild at another radius with the same rows", async () => {
   const { page } = session.browser();
   const errors = recordPageErrors(page);
-  await page.goto(session.preview().url);
+  await page.goto(`${session.preview().url}?probe`); // the graph probe is installed only with ?probe
   await page.getByTestId("node-count").waitFor();
   const nodes = await settledNodes(page);
   let canvas = (await page.getByTestId("graph-canvas").boundingBox())!;
@@ -90,7 +90,7 @@ it("demo: a lasso selects the nodes whose centres lie inside it, shift-lasso add
 it("demo: finding record 1 marks the nodes holding it and centres the view on their centroid", async () => {
   const { page } = session.browser();
   const errors = recordPageErrors(page);
-  await page.goto(session.preview().url);
+  await page.goto(`${session.preview().url}?probe`); // the graph probe is installed only with ?probe
   await page.getByTestId("node-count").waitFor();
   await settledNodes(page);
   expect(await probe(page, (g) => g.offset())).toEqual({ x: 0, y: 0 }); // a fresh fit

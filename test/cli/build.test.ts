@@ -80,6 +80,11 @@ describe("shoal build on the demo table writes what the workbench exports", () =
     expect(plain.run.stdout.split("\n")).toEqual([expect.stringMatching(new RegExp(`wrote ${plain.dir.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}$`)), ""]);
   });
 
+  it("names the component count as b0 once: 'N components (b0)', then 'b1 N', with no separate 'b0 N'", () => {
+    expect(plain.run.stdout).toMatch(/^\d+ nodes, \d+ edges?, \d+ components? \(b0\), cycle rank \d+, b1 \d+ at radius 0\.5;/);
+    expect(plain.run.stdout).not.toMatch(/b0 \d/);
+  });
+
   it("without --columns the features are every numeric column but the id and the outcomes (the demo header less pump_id, district, family and the two outcomes)", () => {
     const summary = JSON.parse(readFileSync(join(plain.dir, "summary.json"), "utf8"));
     expect(summary.params.features).toEqual(demoFeatures);

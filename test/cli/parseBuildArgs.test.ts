@@ -18,6 +18,9 @@ describe("parseBuildArgs", () => {
     [["--scale", "log"], "invalid scaling: log"],
     [["--landmarks", "kmeans"], "invalid landmark rule: kmeans"],
     [["--missing", "zero"], "invalid missing-value policy: zero"],
+    [["--scale", "zscore", "--scale", "none"], "--scale given twice"],
+    [["--seed=1", "--seed", "2"], "--seed given twice"],
+    [["--region-nodes", "1", "--region-name"], "missing value for --region-name"],
   ])("%j is rejected with %j", (extra, message) => {
     expect(() => parseBuildArgs([...base, ...extra])).toThrow(new Error(message));
   });

@@ -148,6 +148,15 @@ describe.concurrent("region errors: one line on stderr, exit code 2, nothing wri
     await fails(["explain", smallPath, ...smallArgs, "--rows", "1,6"], "record out of range: 6 (the file has records 1 to 5)");
   });
 
+  it("explain --nodes 1 --versus-nodes 1: \"both sides are empty after leaving out the 2 rows in both sets\" (node 1 = records 1, 2)", async () => {
+    await fails(["explain", smallPath, ...smallArgs, "--nodes", "1", "--versus-nodes", "1"], "both sides are empty after leaving out the 2 rows in both sets");
+  });
+
+  it("explain --rows 1 --versus-rows 5 with --out says '1 row inside, 1 in the second set' in the singular", async () => {
+    const run = await runShoal(["explain", smallPath, ...smallArgs, "--rows", "1", "--versus-rows", "5", "--out", join(scratch, "one.csv")]);
+    expect(run.stdout).toContain("; 1 row inside, 1 in the second set; 0 rows left out of the build;");
+  });
+
   it("explain --versus-rows 0: \"invalid --versus-rows: 0 (expected numbers from 1, separated by commas)\"", async () => {
     await fails(["explain", smallPath, ...smallArgs, "--nodes", "1", "--versus-rows", "0"], "invalid --versus-rows: 0 (expected numbers from 1, separated by commas)");
   });

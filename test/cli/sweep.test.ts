@@ -25,7 +25,7 @@ function shoal(args: readonly string[]): Promise<{ code: number; stdout: string;
   });
 }
 
-const header = "radius,nodes,edges,components,b0,b1,cycle_rank,balls_per_row,largest_node_share,largest_component_share,plateau,plateau_middle";
+const header = "radius,nodes,edges,components,b0,b1,cycle_rank,nodes_per_row,largest_node_share,largest_component_share,plateau,plateau_middle";
 const demoArgs = ["--id", "pump_id", "--outcome", "failed_within_90d,downtime_h", "--radius-min", "0.3", "--radius-max", "3", "--steps", "4"];
 
 describe("shoal sweep as a process", () => {
@@ -36,6 +36,8 @@ describe("shoal sweep as a process", () => {
     expect(ok.code).toBe(0);
     expect(ok.stderr).toBe("");
     expect(ok.stdout).toMatch(/^4 radii from 0\.3 to 3; .* wrote .*sweep\.csv\n$/);
+    expect(ok.stdout).toMatch(/; (plateau middle [\d.]+ \(b0 \d+, b1 \d+\)|no plateau middle); /); // the screen's words for the widest plateau's middle
+    expect(ok.stdout).not.toContain("suggested");
     const lines = readFileSync(good, "utf8").split("\n");
     expect(lines[0]).toBe(header);
     expect(lines.length).toBe(1 + 4 + 1); // header, 4 radii, the final newline

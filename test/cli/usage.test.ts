@@ -3,6 +3,9 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { buildUsage } from "../../src/cli/parseBuildArgs.ts";
 import { sweepUsage } from "../../src/cli/parseSweepArgs.ts";
+import { explainUsage } from "../../src/cli/parseExplainArgs.ts";
+import { hotspotsUsage } from "../../src/cli/parseHotspotArgs.ts";
+import { topUsage } from "../../src/cli/main.ts";
 import { repoRoot, runShoal } from "./runShoal.ts";
 
 const packageVersion = (JSON.parse(readFileSync(`${repoRoot}package.json`, "utf8")) as { version: string }).version;
@@ -25,11 +28,20 @@ describe.concurrent("shoal help and version", () => {
   it("shoal --version prints shoal and the package.json version and exits 0", async () => {
     expect(await runShoal(["--version"])).toEqual({ code: 0, stdout: `shoal ${packageVersion}\n`, stderr: "" });
   });
+
+  it("shoal --version --x is an error with exit 2: \"unexpected argument: --x\"", async () => {
+    expect(await runShoal(["--version", "--x"])).toEqual({ code: 2, stdout: "", stderr: "shoal: unexpected argument: --x\n" });
+  });
+
+  it("shoal with no arguments prints the short command list on stderr, nothing on stdout, and exits 2", async () => {
+    expect(await runShoal([])).toEqual({ code: 2, stdout: "", stderr: `${topUsage}\n` });
+    expect(topUsage.split("\n").length).toBe(6); // build, sweep, explain, hotspots, help, --version
+  });
 });
 
 describe("usage text", () => {
   it("says DATA, not DATA.csv, and names the formats read (CSV, TSV, Parquet)", () => {
-    for (const usage of [buildUsage, sweepUsage]) {
+    for (const usage of [buildUsage, sweepUsage, explainUsage, hotspotsUsage]) {
       expect(usage).not.toContain("DATA.csv");
       expect(usage).toContain("a delimited text file (CSV, TSV, ; or | separated) or a Parquet file");
     }

@@ -18,6 +18,12 @@ describe("rowOfQuery", () => {
     expect(rowOfQuery(table, "name", "7", "record")).toEqual({ reason: "no record 7: the table has records 1 to 6" });
     expect(rowOfQuery(table, "name", "0", "record")).toEqual({ reason: "no record 0: the table has records 1 to 6" });
   });
+  it("0x10, 1e1 and +4 are not record numbers (decimal digits only); ' 4 ' with spaces is record 4", () => {
+    expect(rowOfQuery(table, "name", "0x10", "record")).toEqual({ reason: "not a record number: 0x10" });
+    expect(rowOfQuery(table, "name", "1e1", "record")).toEqual({ reason: "not a record number: 1e1" });
+    expect(rowOfQuery(table, "name", "+4", "record")).toEqual({ reason: "not a record number: +4" });
+    expect(rowOfQuery(table, "name", " 4 ", "record")).toBe(3);
+  });
   it("2.5 is not a record number", () => {
     expect(rowOfQuery(table, "name", "2.5", "record")).toEqual({ reason: "not a record number: 2.5" });
   });
@@ -43,5 +49,18 @@ describe("findRow", () => {
   });
   it("record 9 is unknown, with the range", () => {
     expect(findRow(table, result, "name", "9", "record")).toEqual({ kind: "unknown", reason: "no record 9: the table has records 1 to 6" });
+  });
+});
+
+describe("findRow with a label on several rows", () => {
+  const twice = readTableText("name,x\nkappa,1\nlambda,2\nkappa,3\n").table;
+  const built = buildCover(twice, { features: ["x"], scale: "none", metric: "euclidean", radius: 0.5, landmarks: "greedy-file-order", seed: 1 });
+
+  it("kappa (records 1 and 3) shows record 1 and says 'label matches 2 rows; showing record 1'", () => {
+    expect(findRow(twice, built, "name", "kappa", "label")).toEqual({ kind: "found", row: 0, nodes: [0], note: "label matches 2 rows; showing record 1" }); // node 1 = {record 1}: worked by hand
+  });
+
+  it("lambda, on one row, has no note", () => {
+    expect(findRow(twice, built, "name", "lambda", "label")).toEqual({ kind: "found", row: 1, nodes: [1] }); // node 2 = {record 2}: worked by hand
   });
 });

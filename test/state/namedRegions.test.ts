@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { nodeMembers } from "../../src/core/index.ts";
-import { createActions, regionLetters } from "../../src/state/actions.ts";
+import { createActions } from "../../src/state/actions.ts";
+import { regionLetters } from "../../src/state/regionNames.ts";
 import { createWorkbenchStore } from "../../src/state/store.ts";
 import { inThreadClient, noDemo, steppingClock } from "./support.ts";
 
@@ -39,6 +40,27 @@ describe("named regions", () => {
     expect(store.getState().regions[0]!.name).toBe("north pumps");
     actions.deleteRegion(region.id);
     expect(store.getState()).toMatchObject({ regions: [], activeRegionId: null });
+  });
+
+  it("keep A, keep B, delete A, keep again names the new region 'Region A', the first unused name (worked by hand)", async () => {
+    const { actions } = await built();
+    actions.selectNode(0, true);
+    const a = actions.keepSelectionAsRegion()!;
+    const b = actions.keepSelectionAsRegion()!;
+    expect(b.name).toBe("Region B");
+    actions.deleteRegion(a.id);
+    expect(actions.keepSelectionAsRegion()!.name).toBe("Region A");
+    expect(actions.keepSelectionAsRegion()!.name).toBe("Region C");
+  });
+
+  it("a rename to a name another region has is refused with a reason; renaming a region to its own name is allowed", async () => {
+    const { store, actions } = await built();
+    actions.selectNode(0, true);
+    const a = actions.keepSelectionAsRegion()!;
+    const b = actions.keepSelectionAsRegion()!;
+    expect(actions.renameRegion(b.id, " Region A ")).toBe("another region is named Region A");
+    expect(store.getState().regions.map((r) => r.name)).toEqual(["Region A", "Region B"]);
+    expect(actions.renameRegion(a.id, "Region A")).toBeNull();
   });
 
   it("an empty selection keeps no region", async () => {

@@ -9,6 +9,7 @@ import { formatNumber } from "../../src/ui/format.ts";
 import { formatP } from "../../src/ui/formatP.ts";
 import { ecdfPath } from "../../src/ui/panels/ecdfPath.ts";
 import { RegionPane } from "../../src/ui/panels/RegionPane.tsx";
+import { ksPChoices } from "../../src/ui/panels/RegionTableView.tsx";
 import { loadSmallTable, smallCsv } from "./support/smallTable.ts";
 
 // The small table (worked in support/smallTable.ts): node 1 = {p1, p2, p3}, node 2 = {p3, p4, p6, p7},
@@ -99,6 +100,22 @@ describe("region pane", () => {
       actions().keepSelectionAsRegion();
     });
     expect((screen.getByRole("button", { name: "Export region rows (.csv)" }) as HTMLButtonElement).disabled).toBe(false);
+  });
+
+  it("the region-rows export says it 'contains row-level data', as the main export does", async () => {
+    render(<RegionPane />);
+    await loadSmallTable();
+    expect(screen.getByRole("button", { name: "Export region rows (.csv)" }).parentElement!.querySelector(".export-note")!.textContent).toBe(" contains row-level data");
+  });
+
+  it("the adjusted-p column's tooltip says the exact p ignores ties and Stephens' correction is not applied", async () => {
+    render(<RegionPane />);
+    await loadSmallTable();
+    await select(0);
+    const header = await screen.findByRole("columnheader", { name: "adjusted p" });
+    expect(header.getAttribute("title")).toContain(ksPChoices);
+    expect(ksPChoices).toContain("as if there were no ties");
+    expect(ksPChoices).toContain("without Stephens' small-sample correction");
   });
 });
 

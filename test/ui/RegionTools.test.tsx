@@ -84,3 +84,17 @@ it("shift+Enter in the node list adds the focused node to the selection, and a s
   fireEvent.keyDown(list, { key: "Enter", shiftKey: true });
   expect(workbenchStore.getState().selection).toEqual([]);
 });
+
+it("renaming Region B to 'Region A' is refused: the field goes back to 'Region B' and says 'another region is named Region A'", async () => {
+  render(<RegionList />);
+  await loadSmallTable();
+  act(() => actions().selectNodes([0]));
+  act(() => void actions().keepSelectionAsRegion());
+  act(() => void actions().keepSelectionAsRegion());
+  const second = screen.getAllByRole("textbox", { name: "region name" })[1]!;
+  fireEvent.change(second, { target: { value: "Region A" } });
+  fireEvent.blur(second);
+  expect(workbenchStore.getState().regions.map((r) => r.name)).toEqual(["Region A", "Region B"]);
+  expect(second).toHaveProperty("value", "Region B");
+  expect(screen.getByRole("status").textContent).toBe("another region is named Region A");
+});

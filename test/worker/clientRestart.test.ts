@@ -4,7 +4,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { createWorkerClient } from "../../src/worker/client.ts";
 import type { CoverParams, ParsedTable } from "../../src/core/index.ts";
-import type { Answer, Request, WorkerMessage } from "../../src/worker/protocol.ts";
+import { lane, type Answer, type Request, type WorkerMessage } from "../../src/worker/protocol.ts";
 
 class FakeWorker {
   static made: FakeWorker[] = [];
@@ -101,5 +101,32 @@ describe("worker client with a Worker: a request that cannot be posted", () => {
     void client.send({ type: "build", params });
     void client.send({ type: "build", params });
     expect(FakeWorker.made[1]!.sent.map((m) => m.type)).toEqual(["build"]);
+  });
+});
+
+describe("region tables: a newer one cancels the older, and nothing else", () => {
+  const regionTable = (first: number) =>
+    ({ type: "regionTable", rowsRead: 2, usedRows: new Uint32Array([0, 1]), region: new Uint32Array([first]), versus: null, labelColumn: null }) as const;
+
+  it("without shared memory: the older region table answers 'cancelled'; a node-statistics request and the newer table are sent again", async () => {
+    const client = createWorkerClient();
+    const older = client.send(regionTable(0));
+    void client.send({ type: "nodeStats", rows: new Uint32Array([0]), columns: ["x"] });
+    void client.send(regionTable(1));
+    expect(await older).toEqual({ id: 1, type: "cancelled" });
+    const second = FakeWorker.made[1]!;
+    expect(second.sent.map((m) => `${m.type}${"id" in m ? m.id : ""}`)).toEqual(["nodeStats2", "regionTable3"]);
+  });
+
+  it("with shared memory: sending a region table sets the region lane's flag to the older id and leaves the view and compute flags at 0", () => {
+    vi.stubGlobal("crossOriginIsolated", true);
+    const client = createWorkerClient();
+    const setup = FakeWorker.made[0]!.sent[0] as unknown as { cancelFlags: Int32Array };
+    void client.send({ type: "build", params });
+    void client.send({ type: "exportZip", result: {} as never, context: {} as never });
+    void client.send(regionTable(0));
+    void client.send(regionTable(1));
+    expect(setup.cancelFlags[lane.region]).toBe(3); // request 3 is the older region table
+    expect([setup.cancelFlags[lane.view], setup.cancelFlags[lane.compute]]).toEqual([0, 0]);
   });
 });

@@ -15,8 +15,13 @@ export interface GraphProbe {
   readonly regions: () => { readonly name: string; readonly rows: number[] }[];
 }
 
-/** Puts the probe on `window`; returns the function that takes it away. */
+/**
+ * Puts the probe on `window` when the page was opened with `?probe` in its URL (the browser tests
+ * do; a user's page never carries it, so the regions' rows stay off `window`); returns the
+ * function that takes it away.
+ */
 export function installGraphProbe(layout: () => Layout | null, view: () => View | null, offset: () => { x: number; y: number }): () => void {
+  if (!new URLSearchParams(window.location.search).has("probe")) return () => {};
   const probe: GraphProbe = {
     nodes: () => {
       const current = layout();

@@ -9,7 +9,7 @@ export interface Point {
  * it crosses; an odd count is inside. Each edge (a, b) counts when it straddles the ray's height
  * (a.y > y) ≠ (b.y > y), and the crossing lies to the right of the point. The half-open test on y
  * counts a vertex on the ray once. The polygon closes itself (last vertex back to the first).
- * Common practice, no source (the crossing-number test found in computational-geometry texts).
+ * Source: M. Shimrat, "Algorithm 112: Position of point relative to polygon", Commun. ACM 5(8):434, 1962.
  * Degenerate input: fewer than three vertices enclose nothing (false). O(v) for v vertices.
  * @example isInsidePolygon({ x: 1, y: 1 }, [{ x: 0, y: 0 }, { x: 2, y: 0 }, { x: 2, y: 2 }, { x: 0, y: 2 }]) // => true
  */

@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { actions } from "../../state/actions.ts";
-import type { FindMode } from "../../state/findRow.ts";
+import type { FindMode, RowPlace } from "../../state/findRow.ts";
 import { selectRowPlace } from "../../state/regionSelectors.ts";
 import { plural } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
@@ -29,14 +29,18 @@ export function FindRow() {
       <input type="search" aria-label="row to find" placeholder={mode === "record" ? "e.g. 12" : "label"} value={text} onChange={(e) => setText(e.currentTarget.value)} />
       <button type="submit">Find</button>
       <output data-testid="find-row-result" aria-live="polite">
-        {place === null
-          ? ""
-          : place.kind === "found"
-            ? `record ${place.row + 1} is in ${plural(place.nodes.length, "node")}: ${place.nodes.map((k) => k + 1).join(", ")}`
-            : place.kind === "left-out"
-              ? `record ${place.row + 1} is not in the build: ${place.reason}`
-              : place.reason}
+        {place === null ? "" : placeText(place)}
       </output>
     </form>
   );
+}
+
+/** The found row's nodes or why it is not in the build, after the note when a label matched several rows. */
+function placeText(place: RowPlace): string {
+  if (place.kind === "unknown") return place.reason;
+  const where =
+    place.kind === "found"
+      ? `record ${place.row + 1} is in ${plural(place.nodes.length, "node")}: ${place.nodes.map((k) => k + 1).join(", ")}`
+      : `record ${place.row + 1} is not in the build: ${place.reason}`;
+  return place.note === undefined ? where : `${place.note}. ${where}`;
 }

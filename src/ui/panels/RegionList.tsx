@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { actions } from "../../state/actions.ts";
 import { selectRegionOverlaps } from "../../state/regionSelectors.ts";
 import { formatCount, plural } from "../format.ts";
@@ -9,12 +10,18 @@ export function RegionList() {
   const regions = useWorkbench((s) => s.regions);
   const active = useWorkbench((s) => s.activeRegionId);
   const overlaps = useWorkbench(selectRegionOverlaps);
+  const [refused, setRefused] = useState<{ id: number; reason: string } | null>(null);
   if (regions.length === 0) return null;
   return (
     <section className="region-list" aria-label="regions">
       <ul>
         {regions.map((region, place) => {
           const { colour, dash } = outlineStyle(place);
+          const rename = (field: HTMLInputElement): void => {
+            const reason = actions().renameRegion(region.id, field.value);
+            if (reason !== null) field.value = region.name;
+            setRefused(reason === null ? null : { id: region.id, reason });
+          };
           return (
             <li key={region.id} data-testid="region">
               <svg width="22" height="12" aria-hidden="true">
@@ -25,9 +32,10 @@ export function RegionList() {
                 aria-label="region name"
                 defaultValue={region.name}
                 key={region.name}
-                onBlur={(e) => actions().renameRegion(region.id, e.currentTarget.value)}
-                onKeyDown={(e) => e.key === "Enter" && actions().renameRegion(region.id, e.currentTarget.value)}
+                onBlur={(e) => rename(e.currentTarget)}
+                onKeyDown={(e) => e.key === "Enter" && rename(e.currentTarget)}
               />
+              {refused?.id === region.id && <span role="status" className="region-name-refused">{refused.reason}</span>}
               <span data-testid="region-rows">{plural(region.rows.length, "row")}</span>
               <label>
                 <input type="checkbox" checked={active === region.id} onChange={(e) => actions().setActiveRegion(e.currentTarget.checked ? region.id : null)} />

@@ -16,6 +16,7 @@ export function RegionRowsButton() {
       >
         Export region rows (.csv)
       </button>
+      <span className="export-note"> contains row-level data</span>
       {count === 0 && <span className="note"> Keep a region first.</span>}
       {status.state === "failed" && <span role="alert" className="error">Export failed: {status.error}</span>}
     </div>

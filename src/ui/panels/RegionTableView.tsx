@@ -5,6 +5,10 @@ import { formatCount, formatNumber } from "../format.ts";
 import { formatP } from "../formatP.ts";
 import { EcdfPlot, insideStroke, outsideStroke } from "./EcdfPlot.tsx";
 
+/** How the KS p-value is computed, said once for the column's tooltip (the README's region pane section says the same). */
+export const ksPChoices =
+  "The exact p (when m·n ≤ 10,000) is computed as if there were no ties, which makes it conservative; beyond that it is the asymptotic Kolmogorov distribution at √(mn/(m+n))·D, without Stephens' small-sample correction.";
+
 type NumericLine = Extract<RegionTableLine, { kind: "numeric" }>;
 
 /** The numeric lines of a region table, in the worker's order (largest D first), each with its two-CDF plot and a line of detail. */
@@ -23,7 +27,7 @@ export function RegionTableView({ lines, curves, otherName, versusLabel }: { lin
           <th scope="col" title={`Share of rows at or below each value: the region solid, ${otherName} dashed`}>distribution</th>
           <th scope="col" title="Largest vertical gap between the two curves (two-sample Kolmogorov–Smirnov D, 0 to 1); the table is sorted by it">gap D</th>
           <th scope="col" title={`Difference of the means in pooled standard deviations, region minus ${otherName} (Cohen's d; J. Cohen, Statistical Power Analysis for the Behavioral Sciences, 2nd ed., 1988)`}>{versusLabel}</th>
-          <th scope="col" title="Kolmogorov–Smirnov p-value after the Benjamini–Hochberg adjustment over all columns tested (J. R. Stat. Soc. B 57:289, 1995)">adjusted p</th>
+          <th scope="col" title={`Kolmogorov–Smirnov p-value after the Benjamini–Hochberg adjustment over all columns tested (J. R. Stat. Soc. B 57:289, 1995). ${ksPChoices}`}>adjusted p</th>
         </tr>
       </thead>
       <tbody>

@@ -12,6 +12,10 @@ describe("cohensD", () => {
     assertClose(cohensD([2, 4, 6], [1, 3]), Math.sqrt(1.2));
   });
 
+  it("the hand-worked cases come out bit for bit as √1.2, 2/√5.6 and 1/√2 with the means and variances of mean.ts and sampleVariance.ts", () => {
+    assertClose([cohensD([2, 4, 6], [1, 3]), cohensD([5, 7, 9, 11], [4, 6, 8]), cohensD([3], [1, 3])], [Math.sqrt(1.2), 2 / Math.sqrt(5.6), 1 / Math.sqrt(2)], { absolute: 0 }); // worked by hand, as above
+  });
+
   it("5, 7, 9, 11 against 4, 6, 8 gives 2 / √5.6", () => {
     assertClose(cohensD([5, 7, 9, 11], [4, 6, 8]), 2 / Math.sqrt(5.6)); // worked by hand: means 8, 6; squares 20 + 8 over 5 degrees of freedom
   });

@@ -7,7 +7,7 @@ const concave = Object.freeze([
   { x: 0, y: 0 }, { x: 3, y: 0 }, { x: 3, y: 1 }, { x: 1, y: 1 }, { x: 1, y: 2 }, { x: 3, y: 2 }, { x: 3, y: 3 }, { x: 0, y: 3 },
 ]);
 
-describe("isInsidePolygon (even–odd rule, common practice)", () => {
+describe("isInsidePolygon (even–odd crossing test: M. Shimrat, Algorithm 112, Commun. ACM 5(8):434, 1962)", () => {
   it("the centre (1, 1) of the square 0..2 is inside (one crossing to the right, worked by hand)", () => {
     expect(isInsidePolygon({ x: 1, y: 1 }, square)).toBe(true);
   });
