@@ -1,7 +1,7 @@
 import { readFile } from "node:fs/promises";
 import { strFromU8, unzipSync } from "fflate";
 import { expect, it } from "vitest";
-import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
+import { recordPageErrors, recordRequests, saveScreenshot, settledNodePoint, useBrowserSession } from "./harness.ts";
 
 // End to end in Chromium: on the demo, select two nodes (shift-click one on the canvas, add another
 // from its pane), keep them as a region, read the region pane, export the region rows, and check
@@ -9,39 +9,6 @@ import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, ty
 // each once, with the cells exactly as in the demo file.
 
 const session = useBrowserSession();
-
-/** CSS-pixel position of an opaque node pixel on the canvas, once the layout has settled (as in workbench.test.ts). */
-async function settledNodePoint(page: LaunchedBrowser["page"]): Promise<{ x: number; y: number }> {
-  let previous = "";
-  for (let attempt = 0; attempt < 40; ++attempt) {
-    await page.waitForTimeout(500);
-    const probe = await page.evaluate(() => {
-      const canvas = document.querySelector<HTMLCanvasElement>("[data-testid=graph-canvas]")!;
-      const context = canvas.getContext("2d")!;
-      const { data, width, height } = context.getImageData(0, 0, canvas.width, canvas.height);
-      let hash = 0;
-      let found: { x: number; y: number } | null = null;
-      for (let i = 0; i < data.length; i += 4 * 7) hash = (hash * 31 + data[i]! + data[i + 3]!) | 0;
-      for (let y = Math.floor(height / 2); y < height && !found; y += 3) {
-        for (let x = 0; x < width; x += 3) {
-          const p = (y * width + x) * 4;
-          const [r, g, b, a] = [data[p]!, data[p + 1]!, data[p + 2]!, data[p + 3]!];
-          if (a === 255 && !(r > 235 && g > 235 && b > 225)) {
-            const q = ((y + 2) * width + x + 2) * 4;
-            if (data[q + 3] === 255) {
-              found = { x: (x + 2) / (canvas.width / canvas.clientWidth), y: (y + 2) / (canvas.height / canvas.clientHeight) };
-              break;
-            }
-          }
-        }
-      }
-      return { hash: String(hash), found };
-    });
-    if (probe.found && probe.hash === previous) return probe.found;
-    previous = probe.hash;
-  }
-  throw new Error("the graph did not settle with a visible node");
-}
 
 /** Splits simple CSV lines (the demo has no quoted cells). */
 const rowsOf = (csv: string): string[][] => csv.trimEnd().split("\n").map((line) => line.split(","));
