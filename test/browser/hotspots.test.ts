@@ -15,7 +15,7 @@ it("demo: a scan of failed_within_90d with 199 replicates finds a top hotspot wi
   const { page } = session.browser();
   const requests = recordRequests(page);
   const errors = recordPageErrors(page);
-  await page.goto(session.preview().url);
+  await page.goto(`${session.preview().url}?probe`); // the graph probe is installed only with ?probe
   await page.getByTestId("node-count").waitFor();
 
   await page.getByRole("tab", { name: "Hotspots" }).click();
