@@ -57,8 +57,8 @@ export function HotspotSettings() {
       </label>
       <label>
         Score
-        <select value={s.score} onChange={(e) => void actions().setHotspotSettings({ hotspotScore: e.currentTarget.value as HotspotScore | "auto" })}>
-          <option value="auto">auto (0/1 → Bernoulli, else normal)</option>
+        <select value={s.score} title="auto: Bernoulli for an outcome of 0s and 1s, otherwise normal" onChange={(e) => void actions().setHotspotSettings({ hotspotScore: e.currentTarget.value as HotspotScore | "auto" })}>
+          <option value="auto">auto (by the values)</option>
           <option value="bernoulli">Bernoulli</option>
           <option value="normal">normal</option>
           <option value="rank">rank (skewed outcomes)</option>
