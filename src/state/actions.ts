@@ -1,6 +1,6 @@
 import { nodeMembers, readingRecord, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
-import type { Answer, TableSource } from "../worker/protocol.ts";
+import type { TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
 import { demoTable } from "./demo.ts";
 import { createHotspotActions, type HotspotActions } from "./hotspotActions.ts";
@@ -13,6 +13,7 @@ import type { DataSource } from "./slices/dataSlice.ts";
 import type { ColumnRole, ParamsSlice } from "./slices/paramsSlice.ts";
 import type { NamedRegion } from "./slices/selectionSlice.ts";
 import { workbenchStore, type WorkbenchStore } from "./store.ts";
+import { answerError, fileStem } from "./answerError.ts";
 
 export interface ActionEnvironment {
   readonly client: WorkerClient;
@@ -316,7 +317,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const reading = s.report ? { reading: readingRecord(s.report.format, s.readOptions.ragged) } : {};
       const regions = s.regions.map((r) => ({ name: r.name, rows: r.rows }));
       const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s), ...reading, regions };
-      const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
+      const stem = fileStem(s.source.fileName);
       set({ exportStatus: { state: "running", error: null } });
       const answer = await env.client.send({ type: "exportZip", result: s.result, context });
       if (ticket !== latestExport) return null;
@@ -337,9 +338,6 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
   };
 }
 
-/** What to show for an answer that is not the one asked for. */
-const answerError = (answer: Answer): string =>
-  answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
 
 let nextRegionId = 1;
 

@@ -1,10 +1,11 @@
 import type { CoverResult } from "../core/index.ts";
 import type { WorkerClient } from "../worker/client.ts";
-import type { Answer, HotspotSettings } from "../worker/protocol.ts";
+import type { HotspotSettings } from "../worker/protocol.ts";
 import { selectHotspotColumn, selectHotspotScan } from "./hotspotSelectors.ts";
 import type { HotspotSlice } from "./slices/hotspotSlice.ts";
 import type { NamedRegion } from "./slices/selectionSlice.ts";
 import type { WorkbenchStore } from "./store.ts";
+import { answerError } from "./answerError.ts";
 
 export type HotspotActions = ReturnType<typeof createHotspotActions>;
 
@@ -120,5 +121,3 @@ export function createHotspotActions(store: WorkbenchStore, env: HotspotEnvironm
   };
 }
 
-const answerError = (answer: Answer): string =>
-  answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;

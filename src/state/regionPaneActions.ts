@@ -1,8 +1,9 @@
 import type { WorkerClient } from "../worker/client.ts";
-import type { Answer, TableSource } from "../worker/protocol.ts";
+import type { TableSource } from "../worker/protocol.ts";
 import { selectExplainedRegion, selectRegionPane } from "./regionPaneSelectors.ts";
 import { selectIdColumn } from "./selectors.ts";
 import type { WorkbenchStore } from "./store.ts";
+import { answerError, fileStem } from "./answerError.ts";
 
 /** The export of region-rows.csv as the worker wrote it. */
 export interface RegionRowsFile {
@@ -65,7 +66,7 @@ export function createRegionPaneActions(store: WorkbenchStore, env: { readonly c
         set({ regionRowsStatus: { state: "failed", error: answerError(answer) } });
         return null;
       }
-      const stem = s.source.fileName.replace(/\.[^.]*$/, "") || "table";
+      const stem = fileStem(s.source.fileName);
       const file = { fileName: `${stem}-region-rows.csv`, text: answer.csv };
       try {
         save(file);
@@ -79,5 +80,3 @@ export function createRegionPaneActions(store: WorkbenchStore, env: { readonly c
   };
 }
 
-const answerError = (answer: Answer): string =>
-  answer.type === "failed" ? answer.message : answer.type === "cancelled" ? "the worker stopped before answering" : `unexpected answer: ${answer.type}`;
