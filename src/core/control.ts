@@ -49,3 +49,14 @@ export function partOf(control: RunControl, from: number, span: number): RunCont
   const { onProgress, shouldStop } = control;
   return { ...(shouldStop ? { shouldStop } : {}), ...(onProgress ? { onProgress: (fraction: number) => onProgress(from + span * fraction) } : {}) };
 }
+
+/** A lap timer over a clock: each call returns the time since the previous call (or since the timer was made). */
+export function lapClock(now: () => number): () => number {
+  let last = now();
+  return () => {
+    const t = now();
+    const elapsed = t - last;
+    last = t;
+    return elapsed;
+  };
+}

@@ -4,7 +4,7 @@ import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/li
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
 import { overlapEdges } from "../nerve/overlapEdges.ts";
-import { Cancelled, type PhasedControl, type RunControl } from "../control.ts";
+import { Cancelled, lapClock, type PhasedControl, type RunControl } from "../control.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { greedyBalls } from "../landmark/greedyBalls.ts";
@@ -70,13 +70,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   if (!(params.radius > 0) || !Number.isFinite(params.radius)) throw new Error(`invalid radius: ${params.radius}`);
   if (!Number.isInteger(params.seed)) throw new Error(`invalid seed: ${params.seed}`);
 
-  let t = now();
-  const lap = (): number => {
-    const t1 = now();
-    const elapsed = t1 - t;
-    t = t1;
-    return elapsed;
-  };
+  const lap = lapClock(now);
   enter("scale");
   const found = landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap });
   const { centers, prepared, scaleTime, landmarkTime } = found;

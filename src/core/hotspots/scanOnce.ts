@@ -1,4 +1,4 @@
-import { Cancelled, partOf } from "../control.ts";
+import { Cancelled, lapClock, partOf } from "../control.ts";
 import type { CoverResult } from "../cover/buildCover.ts";
 import { randomSource } from "../random.ts";
 import type { ParsedTable } from "../table/types.ts";
@@ -26,13 +26,7 @@ import type { Hotspot, HotspotOptions, HotspotScan, HotspotScore } from "./types
  */
 export function scanOnce(parsed: ParsedTable, result: CoverResult, options: HotspotOptions): HotspotScan {
   const now = options.now ?? Date.now;
-  let clock = now();
-  const lap = (): number => {
-    const t = now();
-    const elapsed = t - clock;
-    clock = t;
-    return elapsed;
-  };
+  const lap = lapClock(now);
   const direction = options.direction ?? hotspotDefaults.direction;
   if (direction !== "high" && direction !== "low" && direction !== "both") throw new Error(`invalid direction: ${direction}`);
   const maxNodes = options.maxNodes ?? hotspotDefaults.maxNodes;
