@@ -4,7 +4,6 @@ import { assertClose } from "../../assertClose.ts";
 import { createRowIndex } from "../../../src/core/search/rowIndex.ts";
 import { euclidean, parseCsvText } from "../../../src/core/index.ts";
 import { greedyBalls } from "../../../src/core/landmark/greedyBalls.ts";
-import { spanningForest } from "../../../src/core/nerve/spanningForest.ts";
 import { radiusSweep } from "../../../src/core/sweep/radiusSweep.ts";
 import { pointsTable } from "./support.ts";
 
@@ -33,11 +32,6 @@ describe("per-radius figures", () => {
 });
 
 describe("small pieces", () => {
-  it("spanning forest of the triangle 0–1, 0–2, 1–2 keeps edges 0–1 and 0–2", () => {
-    const edges = { source: Uint32Array.of(0, 0, 1), target: Uint32Array.of(1, 2, 2), shared: Uint32Array.of(1, 1, 1) };
-    expect(Array.from(spanningForest(3, edges))).toEqual([1, 1, 0]); // worked by hand: breadth first from node 0
-  });
-
   it("a greedy net capped at maxLandmarks on the line 0, 1, 2, 3 at r = 1 has 2 landmarks (0, 2), and cap + 1 = 2 when the cap is 1", () => {
     const table = { rows: 4, columns: 1, names: ["x"], values: Float64Array.of(0, 1, 2, 3) };
     const order = Uint32Array.of(0, 1, 2, 3);
