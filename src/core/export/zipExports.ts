@@ -1,8 +1,7 @@
 import { strToU8, zipSync, type Zippable } from "fflate";
-import type { CoverExports } from "./coverExports.ts";
 
-/** Packs the export files into one zip (fflate, deflate level 6) with a fixed timestamp, so equal inputs give equal bytes. */
-export function zipExports(files: CoverExports): Uint8Array {
+/** Packs the export files (name → text: the four tables, graph.graphml, …) into one zip (fflate, deflate level 6) with a fixed timestamp, so equal inputs give equal bytes. */
+export function zipExports(files: Readonly<Record<string, string>>): Uint8Array {
   const mtime = new Date(Date.UTC(2000, 0, 1));
   const entries: Zippable = {};
   for (const [name, text] of Object.entries(files)) entries[name] = [strToU8(text), { mtime }];
