@@ -42,11 +42,12 @@ export function NodeTable() {
   const shown = order.subarray(0, maxTableRows);
   return (
     <div className="node-table" data-testid="node-table" aria-busy={table !== latest}>
-      <table>
-        <caption>
-          {formatCount(table.nodes)} nodes. A heading&apos;s button sorts by its column (press again to reverse); a node&apos;s button opens it.
-          {table.nodes > maxTableRows ? ` The first ${formatCount(maxTableRows)} in this order are listed; sort to bring others up.` : ""}
-        </caption>
+      <p className="note" id="node-table-help">
+        A heading&apos;s button sorts by its column (press again to reverse); a node&apos;s button opens it.
+        {table.nodes > maxTableRows ? ` The first ${formatCount(maxTableRows)} in this order are listed; sort to bring others up.` : ""}
+      </p>
+      <table aria-describedby="node-table-help">
+        <caption>Nodes ({formatCount(table.nodes)})</caption>
         <thead>
           <tr>
             {heading(nodeKey, "node")}
