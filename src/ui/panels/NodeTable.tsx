@@ -19,6 +19,8 @@ export function NodeTable() {
   const latest = useWorkbench(selectNodeTable);
   const selected = useWorkbench((s) => s.selectedNode);
   const table = useDeferredValue(latest);
+  // while the table still shows an older result, its buttons would open nodes of the new one
+  const stale = table !== latest;
   const [sort, setSort] = useState<{ key: string; direction: Direction }>({ key: nodeKey, direction: "ascending" });
   const column = table?.columns.find((c) => c.key === sort.key);
   const order = useMemo(() => {
@@ -41,7 +43,7 @@ export function NodeTable() {
   };
   const shown = order.subarray(0, maxTableRows);
   return (
-    <div className="node-table" data-testid="node-table" aria-busy={table !== latest}>
+    <div className="node-table" data-testid="node-table" aria-busy={stale}>
       <p className="note" id="node-table-help">
         A heading&apos;s button sorts by its column (press again to reverse); a node&apos;s button opens it.
         {table.nodes > maxTableRows ? ` The first ${formatCount(maxTableRows)} in this order are listed; sort to bring others up.` : ""}
@@ -58,7 +60,7 @@ export function NodeTable() {
           {Array.from(shown, (k) => (
             <tr key={k} aria-current={selected === k ? "true" : undefined}>
               <th scope="row">
-                <button type="button" onClick={() => void actions().selectNode(k)}>Node {k + 1}</button>
+                <button type="button" disabled={stale} onClick={() => void actions().selectNode(k)}>Node {k + 1}</button>
               </th>
               {table.columns.map((c) => <td key={c.key}>{c.key === "@size" ? formatCount(c.values[k]!) : formatNumber(c.values[k]!)}</td>)}
             </tr>
