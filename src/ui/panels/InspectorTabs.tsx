@@ -19,7 +19,8 @@ export function InspectorTabs() {
   const [active, setActive] = useState<(typeof tabs)[number]["id"]>("node");
   const onKey = (event: KeyboardEvent<HTMLDivElement>): void => {
     if (event.key !== "ArrowRight" && event.key !== "ArrowLeft") return;
-    const next = tabs[(tabs.findIndex((t) => t.id === active) + 1) % tabs.length]!;
+    const step = event.key === "ArrowRight" ? 1 : tabs.length - 1;
+    const next = tabs[(tabs.findIndex((t) => t.id === active) + step) % tabs.length]!;
     setActive(next.id);
     document.getElementById(`tab-${next.id}`)?.focus();
   };
