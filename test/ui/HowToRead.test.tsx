@@ -3,7 +3,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { render, screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import { buildCover, defaultRadius, nodeRows, parseCsvText, type ParsedTable } from "../../src/core/index.ts";
+import { buildCover, defaultRadius, nodeRows, parseCsvText, scanHotspots, type ParsedTable } from "../../src/core/index.ts";
 import { flareFigures as f } from "../../src/ui/panels/flareFigures.ts";
 import { HowToRead } from "../../src/ui/panels/HowToRead.tsx";
 import { assertClose } from "../assertClose.ts";
@@ -46,6 +46,9 @@ describe("How to read this", () => {
     assertClose(meanOver(parsed, "suction_pressure_kpa", outside), f.suctionOutside, { absolute: 0.5 });
     assertClose(meanOver(parsed, "age_years", inside), f.ageInside, { absolute: 0.5 });
     assertClose(meanOver(parsed, "age_years", outside), f.ageOutside, { absolute: 0.5 });
+    // the region of highest score does not depend on the replicates (only its p-value does), so 99 keep this quick
+    const scan = scanHotspots(parsed, result, { outcome: "failed_within_90d", replicates: 99 });
+    expect(Array.from(scan.hotspots[0]!.nodes, (k) => k + 1)).toEqual([...f.hotspotNodes]); // the README's hotspot paragraph: nodes 3 9 15 35 37 42 43 61
   });
 
   it("explains node, edge, radius, metric, component and loop under one h2 and three h3 headings, and keeps the cautions", () => {

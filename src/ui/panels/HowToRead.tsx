@@ -77,12 +77,15 @@ export function HowToRead() {
           ({percent(f.topNodeShares[0])} and {percent(f.topNodeShares[1])} of their pumps failed), then {f.flareNodes.slice(2).join(", ")}.
         </li>
         <li>
-          Select those five nodes (shift-click each), keep them as a region and open the Region tab: {f.rowsInside} pumps,
+          Select those five nodes (shift-click each, or shift+Enter on each in the nodes list), keep them as a region and open the Region tab: {f.rowsInside} pumps,
           of which {percent(f.failedInside)} failed within 90 days against {percent(f.failedOutside)} of the rest. They
           vibrate more ({f.vibrationInside} against {f.vibrationOutside} mm/s), run at lower suction pressure ({f.suctionInside} against{" "}
           {f.suctionOutside} kPa) and are older ({f.ageInside} against {f.ageOutside} years).
         </li>
-        <li>The Hotspots tab&apos;s scan finds the same place as its top hotspot, with a p-value that allows for the search.</li>
+        <li>
+          The Hotspots tab&apos;s scan of <code>failed_within_90d</code> finds the same place: its top hotspot holds these
+          five nodes and {f.hotspotNodes.length - f.flareNodes.length} of their neighbours, with a p-value that allows for the search.
+        </li>
         <li>
           Then check it: sweep the radius and try other seeds, and see whether the branch and its high failure share persist.
         </li>

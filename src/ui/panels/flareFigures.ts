@@ -24,4 +24,6 @@ export const flareFigures = {
   suctionOutside: 210,
   ageInside: 22,
   ageOutside: 12,
+  /** Nodes of the top hotspot of failed_within_90d at the scan's defaults (K = 8, high). */
+  hotspotNodes: [3, 9, 15, 35, 37, 42, 43, 61],
 } as const;
