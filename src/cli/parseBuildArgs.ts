@@ -12,6 +12,8 @@ export interface BuildCommand extends CommonOptions {
   readonly read: ByteReadOptions;
   /** --region-nodes with its --region-name: the rows written to region-rows.csv; null for none. */
   readonly region: { readonly name: string; readonly choice: RowChoice } | null;
+  /** --graphml: also write graph.graphml beside the other files. */
+  readonly graphml: boolean;
 }
 
 export const buildUsage = `usage: shoal build DATA --out DIR [options]
@@ -22,12 +24,18 @@ export const buildUsage = `usage: shoal build DATA --out DIR [options]
   --region-nodes 3,4  also write region-rows.csv: the rows of these nodes (1-based), each with its
                       cells as read, and list the region in summary.json
   --region-name NAME  the region's name in region-rows.csv and summary.json (default region)
+  --graphml           also write graph.graphml: the graph in GraphML, with nodes.csv's columns as
+                      node attributes and edges.csv's shared counts on the edges
 ${commonUsage}
 ${readUsage}`;
 
 /** Parses `shoal build …` arguments; throws one clear message for anything wrong. */
 export function parseBuildArgs(args: readonly string[]): BuildCommand {
-  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" } });
+  const { values, flags, positionals } = strictArgs(
+    args,
+    { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" } },
+    ["graphml"],
+  );
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out DIR");
   let radius: number | null = null;
@@ -40,5 +48,5 @@ export function parseBuildArgs(args: readonly string[]): BuildCommand {
   if (!choice && values["region-name"] !== undefined) throw new Error("--region-name needs --region-nodes");
   if (values["region-name"] === "") throw new Error("invalid --region-name: an empty name");
   const region = choice ? { name: values["region-name"] ?? "region", choice } : null;
-  return { ...readCommonOptions(values), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region };
+  return { ...readCommonOptions(values), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region, graphml: flags.has("graphml") };
 }

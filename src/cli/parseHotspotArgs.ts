@@ -4,7 +4,7 @@ import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
 import { strictArgs } from "./strictArgs.ts";
 
-export interface HotspotCommand extends Omit<BuildCommand, "region"> {
+export interface HotspotCommand extends Omit<BuildCommand, "region" | "graphml"> {
   /** The outcome column scanned. */
   readonly scan: string;
   readonly direction: HotspotDirection;

@@ -1,4 +1,4 @@
-import { coverExports, regionRowsCsv } from "../core/index.ts";
+import { coverExports, graphml, regionRowsCsv } from "../core/index.ts";
 import { buildFromFile } from "./buildFromFile.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { chosenRows } from "./regionArgs.ts";
@@ -8,7 +8,9 @@ import { writeFileSet } from "./writeFileSet.ts";
 /**
  * Reads the table through the same core parser as the workbench, builds, and writes the same
  * nodes.csv, members.csv, edges.csv and summary.json, and with --region-nodes region-rows.csv (the
- * region's rows with their cells read again from the file). The files replace the previous set of
+ * region's rows with their cells read again from the file), and with --graphml graph.graphml (the
+ * graph with nodes.csv's columns as attributes, and the --region-nodes region's flag when there is
+ * one). The files replace the previous set of
  * Shoal's files in the folder as a whole (`writeFileSet`), so a failure leaves the old set complete
  * and a run without a region removes an earlier region-rows.csv.
  */
@@ -30,6 +32,7 @@ export async function runBuild(command: BuildCommand): Promise<string> {
     "edges.csv": files["edges.csv"],
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
     ...regionFiles,
+    ...(command.graphml ? { "graph.graphml": graphml(table, result, { outcomes: command.outcomes, regions }) } : {}),
   });
   const loops = result.betti ? `, b1 ${result.betti.b1}` : "";
   const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? "" : "s"}`;

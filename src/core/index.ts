@@ -118,6 +118,7 @@ export { regionTable, type RegionTable, type RegionTableLine, type RegionTableOp
 export { readRecordTexts, type RecordTextOptions } from "./table/readRecordTexts.ts";
 export { regionRowsCsv, type Region } from "./export/regionRowsCsv.ts";
 export { regionTableCsv, regionTableHeader } from "./export/regionTableCsv.ts";
+export { graphml, type GraphmlContext } from "./export/graphml.ts";
 export { nodeRowShare } from "./cover/nodeRowShare.ts";
 export { numericLevels } from "./table/numericLevels.ts";
 export { componentNodes } from "./regions/componentNodes.ts";

@@ -7,6 +7,7 @@ import { BuildSummary } from "./panels/BuildSummary.tsx";
 import { Cautions } from "./panels/Cautions.tsx";
 import { ColumnRoles } from "./panels/ColumnRoles.tsx";
 import { CoverControls } from "./panels/CoverControls.tsx";
+import { DrawingOrTable } from "./panels/DrawingOrTable.tsx";
 import { FindRow } from "./panels/FindRow.tsx";
 import { InspectorTabs } from "./panels/InspectorTabs.tsx";
 import { RegionList } from "./panels/RegionList.tsx";
@@ -40,7 +41,7 @@ export function App({ openDemo = true }: { openDemo?: boolean }) {
               <RegionList />
             </div>
             <ColorLegend />
-            <ForceGraph />
+            <DrawingOrTable drawing={<ForceGraph />} />
           </>
         )}
       </main>

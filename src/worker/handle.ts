@@ -4,6 +4,7 @@ import {
   countCandidateSets,
   coverExports,
   figureBuffers,
+  graphml,
   isCancelled,
   radiusSweep,
   readTableBytes,
@@ -121,7 +122,11 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           nodeStatistics ??= createNodeStatistics(loaded());
           return { id: request.id, type: "summarised", columns: nodeStatistics(request.rows, request.columns) };
         case "exportZip":
-          return { id: request.id, type: "zipped", bytes: zipExports(coverExports(loaded(), request.result, request.context)) };
+          return {
+            id: request.id,
+            type: "zipped",
+            bytes: zipExports({ ...coverExports(loaded(), request.result, request.context), "graph.graphml": graphml(loaded(), request.result, request.context) }),
+          };
         case "regionTable":
           return regionTableAnswer(loaded(), request, { onProgress: (fraction) => progress("region", fraction), shouldStop: () => isStopped(request) });
         case "regionRows":

@@ -1,7 +1,7 @@
 // Node statistics and the export zip are computed by the worker's handler, not on the page's thread.
 import { strFromU8, unzipSync } from "fflate";
 import { describe, expect, it } from "vitest";
-import { buildCover, coverExports, parseCsvText, zipExports, type CoverParams } from "../../src/core/index.ts";
+import { buildCover, coverExports, graphml, parseCsvText, zipExports, type CoverParams } from "../../src/core/index.ts";
 import { createNodeStatistics } from "../../src/worker/createNodeStatistics.ts";
 import { createHandler, transferables } from "../../src/worker/handle.ts";
 import { lane, laneOf, type Answer } from "../../src/worker/protocol.ts";
@@ -59,8 +59,9 @@ describe("worker: exportZip", () => {
     const result = buildCover(parseCsvText(csv), params);
     const answer = now(handle({ id: 2, type: "exportZip", result, context }, ignore));
     if (answer.type !== "zipped") throw new Error(`expected zipped, got ${JSON.stringify(answer)}`);
-    expect(answer.bytes).toEqual(zipExports(coverExports(parseCsvText(csv), result, context))); // reference: core's writers on this thread
-    expect(Object.keys(unzipSync(answer.bytes)).sort()).toEqual(["edges.csv", "members.csv", "nodes.csv", "summary.json"]);
+    const reference = { ...coverExports(parseCsvText(csv), result, context), "graph.graphml": graphml(parseCsvText(csv), result, context) };
+    expect(answer.bytes).toEqual(zipExports(reference)); // reference: core's writers on this thread
+    expect(Object.keys(unzipSync(answer.bytes)).sort()).toEqual(["edges.csv", "graph.graphml", "members.csv", "nodes.csv", "summary.json"]);
     expect(strFromU8(unzipSync(answer.bytes)["members.csv"]!).split("\n")[0]).toBe("node,row,id");
     expect(transferables(answer)).toEqual([answer.bytes.buffer]);
   });

@@ -1,5 +1,6 @@
 import { useState, type KeyboardEvent } from "react";
 import { HotspotPane } from "./HotspotPane.tsx";
+import { HowToRead } from "./HowToRead.tsx";
 import { NodeList } from "./NodeList.tsx";
 import { NodePane } from "./NodePane.tsx";
 import { RegionPane } from "./RegionPane.tsx";
@@ -10,6 +11,7 @@ const tabs = [
   { id: "region", label: "Region" },
   { id: "stability", label: "Stability" },
   { id: "hotspots", label: "Hotspots" },
+  { id: "guide", label: "How to read" },
 ] as const;
 
 /** The side pane: the open node's members, what sets the region apart, the stability evidence, or the outcome hotspots; tabs move with arrow keys. */
@@ -17,7 +19,8 @@ export function InspectorTabs() {
   const [active, setActive] = useState<(typeof tabs)[number]["id"]>("node");
   const onKey = (event: KeyboardEvent<HTMLDivElement>): void => {
     if (event.key !== "ArrowRight" && event.key !== "ArrowLeft") return;
-    const next = tabs[(tabs.findIndex((t) => t.id === active) + 1) % tabs.length]!;
+    const step = event.key === "ArrowRight" ? 1 : tabs.length - 1;
+    const next = tabs[(tabs.findIndex((t) => t.id === active) + step) % tabs.length]!;
     setActive(next.id);
     document.getElementById(`tab-${next.id}`)?.focus();
   };
@@ -49,6 +52,8 @@ export function InspectorTabs() {
           <RegionPane />
         ) : active === "stability" ? (
           <StabilityPane />
+        ) : active === "guide" ? (
+          <HowToRead />
         ) : (
           <HotspotPane />
         )}

@@ -13,7 +13,7 @@ export function SeedSummary() {
   ] as const;
   return (
     <section className="seed-summary" data-testid="seed-summary">
-      <h3>{runs.seeds.length} seeds at radius {formatNumber(runs.radius)}</h3>
+      <h2>{runs.seeds.length} seeds at radius {formatNumber(runs.radius)}</h2>
       <table>
         <thead><tr><th scope="col">figure</th><th scope="col">min</th><th scope="col">median</th><th scope="col">max</th></tr></thead>
         <tbody>

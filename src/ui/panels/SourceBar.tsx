@@ -17,7 +17,7 @@ export function SourceBar() {
   return (
     <header className="source-bar">
       <div className="brand">
-        <span className="brand-name">Shoal</span>
+        <h1 className="brand-name">Shoal</h1>
         <span className="brand-tag">cover graphs of a table, computed on this machine</span>
       </div>
       <div className="source" aria-live="polite" data-testid="source">

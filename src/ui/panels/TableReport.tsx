@@ -12,7 +12,7 @@ export function TableReport() {
   if (!report) return <p className="note">No table is loaded.</p>;
   const flagged = report.columns.flatMap((c) => c.flagged);
   return (
-    <section className="table-report" aria-label="table report" data-testid="table-report">
+    <section className="table-report" aria-label="table report" data-testid="table-report" tabIndex={0}>
       <ReadingOptions />
       {report.notices.length > 0 && (
         <ul className="notices" aria-label="notices">
@@ -43,7 +43,7 @@ export function TableReport() {
       </table>
       {flagged.length > 0 && (
         <>
-          <h3>Cells counted as missing</h3>
+          <h2>Cells counted as missing</h2>
           <p className="note">Text in a numeric column, and tokens such as NA, NaN or Inf, count as missing values. The first few per column:</p>
           <table>
             <thead><tr><th scope="col">row</th><th scope="col">line</th><th scope="col">column</th><th scope="col">text</th></tr></thead>
