@@ -1,9 +1,8 @@
+// @vitest-environment jsdom
+// jsdom for its strict XML parser (DOMParser with application/xml); the code under test is pure
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { JSDOM } from "jsdom";
 import { escapeXml } from "../../../src/core/export/escapeXml.ts";
-
-const { DOMParser } = new JSDOM().window;
 
 /** Parses `<r a="…">…</r>` with jsdom's strict XML parser and gives back the attribute and the text. */
 function roundTrip(text: string): { attribute: string | null; content: string | null } {
