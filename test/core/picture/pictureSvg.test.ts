@@ -10,7 +10,7 @@ import type { PictureInput } from "../../../src/core/picture/pictureTypes.ts";
 const odd = `a<b&c"d`;
 
 /** Three nodes in a row, two edges, a categorical colour column with an awkward name, one region: made by hand. */
-const input: PictureInput = Object.freeze({
+const input: PictureInput = Object.freeze<PictureInput>({
   width: 800,
   height: 600,
   x: [0, 60, 120],
