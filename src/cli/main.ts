@@ -7,13 +7,16 @@ import { explainUsage, parseExplainArgs } from "./parseExplainArgs.ts";
 import { runExplain } from "./runExplain.ts";
 import { hotspotsUsage, parseHotspotArgs } from "./parseHotspotArgs.ts";
 import { runHotspots } from "./runHotspots.ts";
+import { drawUsage, parseDrawArgs } from "./parseDrawArgs.ts";
+import { runDraw } from "./runDraw.ts";
 
-const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage, hotspots: hotspotsUsage };
+const usages: Readonly<Record<string, string>> = { build: buildUsage, sweep: sweepUsage, explain: explainUsage, hotspots: hotspotsUsage, draw: drawUsage };
 export const topUsage = `shoal build DATA --out DIR [options]     one cover graph: nodes.csv, members.csv, edges.csv, summary.json
 shoal sweep DATA [--out FILE] [options]   the graph's figures at many radii, one CSV line per radius
 shoal explain DATA --nodes 3,4 [options]  what sets the rows of some nodes apart, one CSV line per column
 shoal hotspots DATA --scan COL --out DIR  where an outcome runs high or low, with p-values for the search
-shoal help [build | sweep | explain | hotspots]  the options of a command (also: shoal build --help)
+shoal draw DATA --colour-by COL --out F.svg  a picture of the graph with legend and caption (.svg or .png)
+shoal help [build | sweep | explain | hotspots | draw]  the options of a command (also: shoal build --help)
 shoal --version                           the version`;
 
 /** The version in package.json. */
@@ -42,6 +45,9 @@ export async function main(args: readonly string[]): Promise<number> {
       case "hotspots":
         console.log(await runHotspots(parseHotspotArgs(rest)));
         return 0;
+      case "draw":
+        console.log(await runDraw(parseDrawArgs(rest)));
+        return 0;
       case "--version":
       case "-v":
       case "version":
@@ -56,7 +62,7 @@ export async function main(args: readonly string[]): Promise<number> {
       case "-h": {
         const topic = command === "help" ? rest[0] : undefined;
         if (topic !== undefined && !(topic in usages)) throw new Error(`unknown command: ${topic}`);
-        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}\n\n${hotspotsUsage}` : usages[topic]);
+        console.log(topic === undefined ? `${topUsage}\n\n${buildUsage}\n\n${sweepUsage}\n\n${explainUsage}\n\n${hotspotsUsage}\n\n${drawUsage}` : usages[topic]);
         return 0;
       }
       default:

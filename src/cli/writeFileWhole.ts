@@ -5,7 +5,7 @@ import { rename, rm, writeFile } from "node:fs/promises";
  * renamed over the target only once complete (a rename within one folder replaces atomically on
  * POSIX file systems), so a reader never sees half a file and a failure leaves the old one.
  */
-export async function writeFileWhole(path: string, text: string): Promise<void> {
+export async function writeFileWhole(path: string, text: string | Uint8Array): Promise<void> {
   const staging = `${path}.partial-${process.pid}`;
   try {
     await writeFile(staging, text);

@@ -35,7 +35,7 @@ describe.concurrent("shoal help and version", () => {
 
   it("shoal with no arguments prints the short command list on stderr, nothing on stdout, and exits 2", async () => {
     expect(await runShoal([])).toEqual({ code: 2, stdout: "", stderr: `${topUsage}\n` });
-    expect(topUsage.split("\n").length).toBe(6); // build, sweep, explain, hotspots, help, --version
+    expect(topUsage.split("\n").length).toBe(7); // build, sweep, explain, hotspots, draw, help, --version
   });
 });
 

@@ -8,6 +8,7 @@ import type { View } from "./view.ts";
 import { maxDrawnNodes } from "./drawLimits.ts";
 import { installGraphProbe } from "./graphProbe.ts";
 import { pointsInPolygon } from "./pointInPolygon.ts";
+import { registerPictureSource } from "./pictureSource.ts";
 import { fillColors } from "./scales.ts";
 import { useForceLayout, type Layout } from "./useForceLayout.ts";
 import { useLasso } from "./useLasso.ts";
@@ -99,6 +100,7 @@ export function ForceGraph() {
     observer.observe(element);
     return () => observer.disconnect();
   }, [draw, layout]);
+  useEffect(() => registerPictureSource({ layout: () => layout.current, canvas: () => canvas.current }), [layout]);
   useEffect(() => installGraphProbe(() => layout.current, () => view.current, () => offset.current), [layout]);
 
   if (tooLarge) {

@@ -1,24 +1,10 @@
-import { schemeDark2 } from "d3-scale-chromatic";
+import { outlineStyle } from "../../core/picture/colourSchemes.ts";
 import type { View } from "./view.ts";
 import type { Point } from "./pointInPolygon.ts";
 import type { Layout } from "./useForceLayout.ts";
 
-/** How a region's outline looks: a colour and a dash pattern, so two regions differ by more than hue. */
-export interface OutlineStyle {
-  readonly colour: string;
-  /** Dash and gap lengths in screen pixels; empty for a solid line. */
-  readonly dash: readonly number[];
-}
-
-// ColorBrewer Dark2 through d3-scale-chromatic (C. Brewer, colorbrewer2.org: colour-blind safe for
-// up to three classes); a dash pattern per region carries the difference beyond three
-export const outlineSchemeName = "Dark2 (d3-scale-chromatic, ColorBrewer) with a dash pattern per region";
-const dashes: readonly (readonly number[])[] = [[], [7, 3], [2, 3], [10, 3, 2, 3]]; // common practice, no source
-
-/** The outline style of the region in place `style` of the region list. */
-export function outlineStyle(style: number): OutlineStyle {
-  return { colour: schemeDark2[style % schemeDark2.length]!, dash: dashes[Math.floor(style / schemeDark2.length) % dashes.length]! };
-}
+// one home for the outline styles: core/picture/colourSchemes.ts, shared with the saved picture
+export { outlineSchemeName, outlineStyle, type OutlineStyle } from "../../core/picture/colourSchemes.ts";
 
 export interface RegionMarks {
   /** Per region: its place in the list (the style) and the nodes most of whose rows lie in it. */
