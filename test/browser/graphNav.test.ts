@@ -143,3 +143,45 @@ it("demo: with the canvas focused, an arrow key moves focus to the neighbour clo
   expect(nodes.length).toBeGreaterThan(1);
   expect(errors).toEqual([]);
 });
+
+it("demo: dragging a node pins it where it was dropped; a colour change moves nothing; a new layout keeps it in place; Unpin all lets go", async () => {
+  const { page } = session.browser();
+  const errors = recordPageErrors(page);
+  const nodes = await openDemo(page);
+  const box = (await page.getByTestId("graph-canvas").boundingBox())!;
+  const target = nodes.reduce((a, b) => (Math.hypot(b.x - box.width / 2, b.y - box.height / 2) < Math.hypot(a.x - box.width / 2, a.y - box.height / 2) ? b : a));
+  const from = { x: Math.round(box.x + target.x), y: Math.round(box.y + target.y) };
+  const to = { x: Math.round(box.x + 40), y: Math.round(box.y + 40) };
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(to.x, to.y, { steps: 15 });
+  await page.mouse.up();
+  const afterDrag = await settledNodes(page);
+  const view = (await probe(page, (g) => g.view()))!;
+  const pinned = await probe(page, (g) => g.nodes().filter((n) => n.pinned).map((n) => n.node));
+  expect(pinned).toEqual([target.node]);
+  const dropped = afterDrag.find((n) => n.node === target.node)!;
+  assertClose(dropped, { node: target.node, x: to.x - box.x, y: to.y - box.y }, { absolute: 1e-6 }); // held under the pointer where it was let go
+  await expect.poll(() => page.getByRole("button", { name: /^Unpin all/ }).textContent()).toBe("Unpin all (1)");
+
+  // a colour change redraws, and neither restarts the layout nor moves a node
+  await page.locator(".legend select").first().selectOption("age_years");
+  await page.waitForTimeout(800);
+  expect(await probe(page, (g) => g.nodes().map(({ node, x, y }) => ({ node, x, y })))).toEqual(afterDrag);
+  expect(await probe(page, (g) => g.view())).toEqual(view);
+
+  // a new layout starts from another spiral order; the pinned node keeps its place in the layout (its world point)
+  const worldOf = (p: { x: number; y: number }, v: { k: number; x: number; y: number }): { x: number; y: number } => ({ x: (p.x - v.x) / v.k, y: (p.y - v.y) / v.k });
+  await page.getByRole("button", { name: /^New layout/ }).click();
+  const relaid = await settledNodes(page);
+  const relaidView = (await probe(page, (g) => g.view()))!;
+  assertClose(worldOf(relaid.find((n) => n.node === target.node)!, relaidView), worldOf(dropped, view), { absolute: 1e-6 });
+  expect(relaid.map((n) => worldOf(n, relaidView))).not.toEqual(afterDrag.map((n) => worldOf(n, view)));
+  expect(await probe(page, (g) => g.nodes().filter((n) => n.pinned).map((n) => n.node))).toEqual([target.node]);
+  await saveScreenshot(page, "graph-nav-pinned-new-layout");
+
+  await page.getByRole("button", { name: /^Unpin all/ }).click();
+  expect(await probe(page, (g) => g.nodes().filter((n) => n.pinned).length)).toBe(0);
+  expect(await page.getByRole("button", { name: /^Unpin all/ }).isDisabled()).toBe(true);
+  expect(errors).toEqual([]);
+});

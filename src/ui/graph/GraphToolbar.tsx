@@ -45,7 +45,7 @@ export function GraphToolbar(props: GraphToolbarProps) {
         Lasso
       </button>
       <button type="button" title="Lay the graph out again from another start; pinned nodes stay" onClick={props.onNewLayout}>
-        New layout <span className="graph-toolbar-note">(now {props.layoutSeed})</span>
+        New layout <span className="graph-toolbar-note">#{props.layoutSeed}</span>
       </button>
       <button type="button" disabled={props.pinned === 0} onClick={props.onUnpinAll}>
         Unpin all{props.pinned > 0 ? ` (${props.pinned})` : ""}

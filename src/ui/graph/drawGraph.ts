@@ -178,15 +178,17 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
 /** The keyboard-focus ring: paper inside, the accent outside, 7 px out from the node (clear of the selection ring). */
 export const focusRing: Ring = { light: "#ffffff", dark: focusColour, lightWidth: 1.5, darkWidth: 2.5 };
 
-/** A pinned node (held where a person dragged it) carries a small ink dot on paper at its centre. */
+/** A pinned node (held where a person dragged it) carries a small ink dot on paper on its rim, up and to the right, clear of its number. */
 function drawPins(context: CanvasRenderingContext2D, layout: Layout, k: number): void {
   context.beginPath();
   let any = false;
   for (const node of layout.nodes) {
     if (node.fx == null) continue;
     any = true;
-    context.moveTo(node.x + 3.5 / k, node.y);
-    context.arc(node.x, node.y, 3.5 / k, 0, 2 * Math.PI);
+    const x = node.x + node.radius * Math.SQRT1_2;
+    const y = node.y - node.radius * Math.SQRT1_2;
+    context.moveTo(x + 3.5 / k, y);
+    context.arc(x, y, 3.5 / k, 0, 2 * Math.PI);
   }
   if (!any) return;
   context.fillStyle = "#23272f"; // --ink in styles.css

@@ -128,7 +128,10 @@ export function usePointerGestures(canvas: React.RefObject<HTMLCanvasElement | n
         if (g.kind === "pan") on.current.setView(panView(g.start, p.x - g.from.x, p.y - g.from.y));
         else {
           const view = on.current.view();
-          if (view) on.current.pin(g.node, toWorld(view, p));
+          if (!view) return;
+          // the view holds still under a dragged node (a fitted view would refit as the node moves)
+          on.current.setView(view);
+          on.current.pin(g.node, toWorld(view, p));
         }
       }
       on.current.redraw();
