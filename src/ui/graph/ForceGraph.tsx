@@ -38,7 +38,8 @@ export function ForceGraph() {
   const canvas = useRef<HTMLCanvasElement>(null);
   const view = useViewTransform();
   const hovered = useRef<number | null>(null);
-  const drawn = useRef({ layout: null as unknown, count: 0 });
+  // the layout last drawn, how many drawings so far and the milliseconds they took (read by the probe)
+  const drawn = useRef({ layout: null as unknown, count: 0, ms: 0 });
   // colours worked out once per colouring, not per frame
   const fillOf = useMemo(() => {
     const colourOf = fillColors(fill);
@@ -52,6 +53,7 @@ export function ForceGraph() {
     const current = layout.current;
     const context = element?.getContext("2d");
     if (!element || !context || !current) return;
+    const began = performance.now();
     const ratio = window.devicePixelRatio || 1;
     const { width, height } = size();
     if (element.width !== Math.round(width * ratio) || element.height !== Math.round(height * ratio)) {
@@ -67,7 +69,9 @@ export function ForceGraph() {
     const label = labelled === null ? null : { node: labelled, text: f.captionOf(labelled) };
     drawGraph(context, current, v, { width, height, ...colours, lasso: gestures.lasso(), focused: f.active ? f.focused : null, label });
     if (drawn.current.layout !== current) performance.mark("shoal:graph-drawn"); // the first drawing of this layout
-    drawn.current = { layout: current, count: drawn.current.count + 1 };
+    drawn.current.layout = current;
+    drawn.current.count += 1;
+    drawn.current.ms += performance.now() - began;
   }, []); // everything it reads is a ref or a stable function
   const redraw = useFrameScheduler(draw);
   const { layout, controls, pinned } = useForceLayout(result, redraw, busy, seed);
@@ -115,7 +119,7 @@ export function ForceGraph() {
     return () => observer.disconnect();
   }, [redraw, result]);
   useEffect(
-    () => installGraphProbe(() => layout.current, view, { focused: () => paint.current.focus.focused, drawings: () => drawn.current.count }),
+    () => installGraphProbe(() => layout.current, view, { focused: () => paint.current.focus.focused, drawings: () => drawn.current.count, drawingMs: () => drawn.current.ms }),
     [layout, view],
   );
 

@@ -7,7 +7,7 @@ import { toScreen } from "./viewTransform.ts";
  * What the browser tests read of the drawn graph, on `window.shoalGraph`: each node's centre in
  * CSS pixels of the canvas (0-based node numbers), the view (screen = world · k + (x, y)), the
  * offset that "find a row" added to the view ({ x: 0, y: 0 } otherwise), the node with keyboard
- * focus, the graph's edges, how many times the canvas was drawn, the selected nodes and the
+ * focus, the graph's edges, how many times the canvas was drawn and how long that took, the selected nodes and the
  * regions' rows (0-based) as plain arrays. Read-only; it changes nothing.
  */
 export interface GraphProbe {
@@ -18,6 +18,8 @@ export interface GraphProbe {
   readonly focused: () => number | null;
   readonly edges: () => [number, number][];
   readonly drawings: () => number;
+  /** Milliseconds spent drawing, over all drawings so far. */
+  readonly drawingMs: () => number;
   readonly selection: () => number[];
   readonly regions: () => { readonly name: string; readonly rows: number[] }[];
 }
@@ -26,6 +28,7 @@ export interface GraphProbe {
 export interface ProbeSources {
   readonly focused: () => number | null;
   readonly drawings: () => number;
+  readonly drawingMs: () => number;
 }
 
 /**
@@ -53,6 +56,7 @@ export function installGraphProbe(layout: () => Layout | null, view: ViewTransfo
       return result ? Array.from(result.edges.source, (a, e) => [a, result.edges.target[e]!] as [number, number]) : [];
     },
     drawings: sources.drawings,
+    drawingMs: sources.drawingMs,
     selection: () => [...workbenchStore.getState().selection],
     regions: () => workbenchStore.getState().regions.map((r) => ({ name: r.name, rows: Array.from(r.rows) })),
   };

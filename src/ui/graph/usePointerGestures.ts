@@ -87,7 +87,11 @@ export function usePointerGestures(canvas: React.RefObject<HTMLCanvasElement | n
       dragged.current = false;
       const p = at(event);
       pointers.current.set(event.pointerId, p);
-      event.currentTarget.setPointerCapture?.(event.pointerId);
+      try {
+        event.currentTarget.setPointerCapture?.(event.pointerId);
+      } catch {
+        // a pointer that is already gone (or a scripted one) cannot be captured; the gesture works without
+      }
       const view = on.current.view();
       if (!view) return;
       if (pointers.current.size === 2) {

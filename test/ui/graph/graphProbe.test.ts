@@ -7,7 +7,7 @@ const host = window as unknown as { shoalGraph?: unknown };
 const view: ViewTransform = {
   resolve: () => ({ k: 1, x: 0, y: 0 }), current: () => null, offset: () => ({ x: 0, y: 0 }), isFitted: () => true, set() {}, fit() {}, centreOn() {},
 };
-const install = (): (() => void) => installGraphProbe(() => null, view, { focused: () => null, drawings: () => 0 });
+const install = (): (() => void) => installGraphProbe(() => null, view, { focused: () => null, drawings: () => 0, drawingMs: () => 0 });
 
 afterEach(() => window.history.replaceState(null, "", "/"));
 
