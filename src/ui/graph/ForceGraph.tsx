@@ -5,6 +5,7 @@ import { selectNodeFill } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { drawGraph, hitNode } from "./drawGraph.ts";
 import { maxDrawnNodes } from "./drawLimits.ts";
+import { GraphTooLarge } from "./GraphTooLarge.tsx";
 import { GraphToolbar } from "./GraphToolbar.tsx";
 import { installGraphProbe } from "./graphProbe.ts";
 import { pointsInPolygon } from "./pointInPolygon.ts";
@@ -12,6 +13,7 @@ import { fillColors } from "./scales.ts";
 import { useForceLayout } from "./useForceLayout.ts";
 import { useFrameScheduler } from "./useFrameScheduler.ts";
 import { useGraphFocus, zoomStep } from "./useGraphFocus.ts";
+import { useRowCentring } from "./useRowCentring.ts";
 import { usePointerGestures } from "./usePointerGestures.ts";
 import { useViewTransform } from "./useViewTransform.ts";
 import { toScreen, zoomAround } from "./viewTransform.ts";
@@ -79,7 +81,7 @@ export function ForceGraph() {
   const share = shareValues ? { values: shareValues, style: activeStyle } : null;
   const paint = useRef({ selected, fillOf, region, outlines, share, found, edgeWidthByShared, focus });
   paint.current = { selected, fillOf, region, outlines, share, found, edgeWidthByShared, focus };
-  const gestures = usePointerGestures(canvas, {
+  const gestures = usePointerGestures(canvas, !tooLarge, {
     view: () => view.current(),
     setView: view.set,
     nodeAt: (x, y) => (layout.current && view.current() ? hitNode(layout.current, view.current()!, x, y) : null),
@@ -101,16 +103,7 @@ export function ForceGraph() {
     redraw,
   });
   useEffect(redraw, [selected, fillOf, region, outlines, shareValues, edgeWidthByShared, focus.focused, focus.active, redraw]);
-  // centre the view on the nodes holding the row looked for; back to no offset when the search ends
-  useEffect(() => {
-    const current = layout.current;
-    if (!current) return;
-    const nodes = found.map((k) => current.nodes[k]!).filter(Boolean);
-    const centre = nodes.length === 0 ? null : { x: nodes.reduce((sum, n) => sum + n.x, 0) / nodes.length, y: nodes.reduce((sum, n) => sum + n.y, 0) / nodes.length };
-    const { width, height } = size();
-    view.centreOn(current, centre, width, height);
-    redraw();
-  }, [found, layout, view, redraw]);
+  useRowCentring(found, layout, view, size, redraw);
   useEffect(() => {
     const element = canvas.current;
     if (!element || typeof ResizeObserver === "undefined") return;
@@ -123,14 +116,7 @@ export function ForceGraph() {
     [layout, view],
   );
 
-  if (tooLarge) {
-    return (
-      <p className="too-large" role="status" data-testid="graph-too-large">
-        This graph has {built.landmarks.length.toLocaleString("en-US")} nodes, more than the {maxDrawnNodes.toLocaleString("en-US")} that can be laid out
-        here without freezing the page. Raise the radius to draw it; its counts, statistics and exports are complete.
-      </p>
-    );
-  }
+  if (tooLarge) return <GraphTooLarge nodes={built.landmarks.length} />;
   const zoomBy = (factor: number): void => {
     const v = view.current();
     if (!v) return;

@@ -1,6 +1,6 @@
 import { drawLasso, drawRegionMarks, type RegionMarks } from "./drawRegionMarks.ts";
 import { drawNodeLabel, drawNodeNumbers } from "./drawNodeLabels.ts";
-import { edgeWidth, edgeWidths } from "./edgeWidth.ts";
+import { edgeBatches, fillBatches } from "./drawBatches.ts";
 import type { Layout, LayoutNode } from "./useForceLayout.ts";
 import type { View } from "./view.ts";
 
@@ -61,45 +61,6 @@ function doubleRing(context: CanvasRenderingContext2D, node: { x: number; y: num
     context.arc(node.x, node.y, node.radius + band.middle / k, 0, 2 * Math.PI);
     context.stroke();
   }
-}
-
-type Link = Layout["links"][number];
-
-// drawing order worked out once per layout (edges by width) and once per colouring (nodes by colour),
-// not per frame: at 5,000 nodes the frame budget has no room for regrouping
-const edgeBatchCache = new WeakMap<Layout, { readonly byShared: boolean; readonly batches: readonly { readonly width: number; readonly links: readonly Link[] }[] }>();
-const fillBatchCache = new WeakMap<(node: number) => string, { readonly layout: Layout; readonly batches: readonly { readonly colour: string; readonly nodes: readonly number[] }[] }>();
-
-function edgeBatches(layout: Layout, byShared: boolean): readonly { readonly width: number; readonly links: readonly Link[] }[] {
-  const cached = edgeBatchCache.get(layout);
-  if (cached && cached.byShared === byShared) return cached.batches;
-  let mostShared = 0;
-  for (const link of layout.links) mostShared = Math.max(mostShared, link.shared);
-  const groups = new Map<number, Link[]>();
-  for (const link of layout.links) {
-    const width = byShared ? edgeWidth(link.shared, mostShared) : edgeWidths.plain;
-    let group = groups.get(width);
-    if (!group) groups.set(width, (group = []));
-    group.push(link);
-  }
-  const batches = [...groups].map(([width, links]) => ({ width, links }));
-  edgeBatchCache.set(layout, { byShared, batches });
-  return batches;
-}
-
-function fillBatches(layout: Layout, fillOf: (node: number) => string): readonly { readonly colour: string; readonly nodes: readonly number[] }[] {
-  const cached = fillBatchCache.get(fillOf);
-  if (cached && cached.layout === layout) return cached.batches;
-  const groups = new Map<string, number[]>();
-  for (const node of layout.nodes) {
-    const colour = fillOf(node.index);
-    let group = groups.get(colour);
-    if (!group) groups.set(colour, (group = []));
-    group.push(node.index);
-  }
-  const batches = [...groups].map(([colour, nodes]) => ({ colour, nodes }));
-  fillBatchCache.set(fillOf, { layout, batches });
-  return batches;
 }
 
 const focusColour = "#1d4ed8"; // --accent in styles.css: the accent marks keyboard focus and nothing else on the graph

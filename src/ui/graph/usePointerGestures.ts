@@ -43,9 +43,9 @@ export interface PointerGestures {
  * The canvas's pointer gestures, one at a time: a drag on a node moves it and pins it there; a drag
  * on empty space pans (or, in lasso mode or with shift held, draws a lasso; shift adds to the
  * selection); two pointers pinch-zoom and pan; the wheel zooms about the pointer. A press that
- * moves less than 4 px stays a click.
+ * moves less than 4 px stays a click. `shown` says whether the canvas is on the page.
  */
-export function usePointerGestures(canvas: React.RefObject<HTMLCanvasElement | null>, target: GestureTarget): PointerGestures {
+export function usePointerGestures(canvas: React.RefObject<HTMLCanvasElement | null>, shown: boolean, target: GestureTarget): PointerGestures {
   const on = useRef(target);
   on.current = target;
   const pointers = useRef(new Map<number, Point>());
@@ -65,7 +65,7 @@ export function usePointerGestures(canvas: React.RefObject<HTMLCanvasElement | n
     };
     element.addEventListener("wheel", onWheel, { passive: false });
     return () => element.removeEventListener("wheel", onWheel);
-  }, [canvas]);
+  }, [canvas, shown]); // a canvas taken away (a graph too large to draw) and shown again is a new element
   const at = (event: PointerEvent<HTMLCanvasElement>): Point => {
     const rect = event.currentTarget.getBoundingClientRect();
     return { x: event.clientX - rect.left, y: event.clientY - rect.top };
