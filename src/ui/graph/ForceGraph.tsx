@@ -68,7 +68,7 @@ export function ForceGraph() {
     element.dataset.offset = `${offset.x},${offset.y}`;
     const { focus: f, ...colours } = paint.current;
     const labelled = hovered.current ?? (f.active ? f.focused : null);
-    const label = labelled === null ? null : { node: labelled, text: f.captionOf(labelled) };
+    const label = labelled === null || !current.nodes[labelled] ? null : { node: labelled, text: f.captionOf(labelled) };
     drawGraph(context, current, v, { width, height, ...colours, lasso: gestures.lasso(), focused: f.active ? f.focused : null, label });
     if (drawn.current.layout !== current) performance.mark("shoal:graph-drawn"); // the first drawing of this layout
     drawn.current.layout = current;
