@@ -185,3 +185,36 @@ it("demo: dragging a node pins it where it was dropped; a colour change moves no
   expect(await page.getByRole("button", { name: /^Unpin all/ }).isDisabled()).toBe(true);
   expect(errors).toEqual([]);
 });
+
+it("demo: two touch pointers spreading from 100 px to 200 px apart double the scale and keep the world point under their midpoint", async () => {
+  const { page } = session.browser();
+  const errors = recordPageErrors(page);
+  await openDemo(page);
+  const before = (await probe(page, (g) => g.view()))!;
+  const box = (await page.getByTestId("graph-canvas").boundingBox())!;
+  // two fingers, scripted as pointer events on the canvas (the harness has no multi-touch input)
+  await page.evaluate(`(() => {
+    const canvas = document.querySelector("[data-testid=graph-canvas]");
+    const rect = canvas.getBoundingClientRect();
+    const at = (id, type, x, y) => canvas.dispatchEvent(new PointerEvent(type, {
+      pointerId: id, pointerType: "touch", isPrimary: id === 1, buttons: type === "pointerup" ? 0 : 1, clientX: rect.left + x, clientY: rect.top + y, bubbles: true, cancelable: true,
+    }));
+    const cx = rect.width / 2;
+    const cy = rect.height / 2;
+    at(1, "pointerdown", cx - 50, cy);
+    at(2, "pointerdown", cx + 50, cy);
+    for (let step = 1; step <= 10; ++step) {
+      at(1, "pointermove", cx - 50 - 5 * step, cy);
+      at(2, "pointermove", cx + 50 + 5 * step, cy);
+    }
+    at(1, "pointerup", cx - 100, cy);
+    at(2, "pointerup", cx + 100, cy);
+  })()`);
+  await page.waitForTimeout(100);
+  const after = (await probe(page, (g) => g.view()))!;
+  assertClose(after.k, 2 * before.k); // 200 px / 100 px, worked by hand
+  const middle = { x: box.width / 2, y: box.height / 2 };
+  assertClose({ x: (middle.x - after.x) / after.k, y: (middle.y - after.y) / after.k }, { x: (middle.x - before.x) / before.k, y: (middle.y - before.y) / before.k }, { absolute: 1e-9 });
+  expect(await probe(page, (g) => g.selection())).toEqual([]);
+  expect(errors).toEqual([]);
+});
