@@ -3,7 +3,8 @@ import { pointsInPolygon, type Point } from "../../src/ui/graph/pointInPolygon.t
 import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
 import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
-// Regions as a person makes them on the demo: lasso nodes on the canvas, keep them, find a row,
+// Regions as a person makes them on the demo: lasso nodes on the canvas (in lasso mode: a plain drag
+// on empty space pans the view otherwise; shift-drag lassos in either mode), keep them, find a row,
 // rebuild at another radius. Node centres come from the page's read-only probe, window.shoalGraph (opened with ?probe)
 // (src/ui/graph/graphProbe.ts), in CSS pixels of the canvas.
 
@@ -43,6 +44,7 @@ it("demo: a lasso selects the nodes whose centres lie inside it, shift-lasso add
   await page.goto(`${session.preview().url}?probe`); // the graph probe is installed only with ?probe
   await page.getByTestId("node-count").waitFor();
   const nodes = await settledNodes(page);
+  await page.getByRole("button", { name: "Lasso", exact: true }).click(); // a plain drag on empty space now lassos instead of panning
   let canvas = (await page.getByTestId("graph-canvas").boundingBox())!;
   // a concave "L" over the left half, starting in the top-left corner (inside the fit's 16 px margin: no node there)
   let w = canvas.width;

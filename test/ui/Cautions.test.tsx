@@ -43,6 +43,6 @@ it("before any table is loaded, the footer shows every sentence of the README's 
 it("with a built graph the footer still shows every sentence of the README's cautions", async () => {
   render(<App openDemo={false} />);
   await loadSmallTable();
-  expect(screen.getByRole("img", { name: /cover graph with 3 nodes and 2 edges/ })).toBeTruthy();
+  expect(screen.getByRole("application", { name: /cover graph with 3 nodes and 2 edges/ })).toBeTruthy();
   for (const sentence of readmeCautionSentences()) expect(footerText()).toContain(sentence);
 });

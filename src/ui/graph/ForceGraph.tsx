@@ -1,21 +1,27 @@
-import { useCallback, useEffect, useRef } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { actions } from "../../state/actions.ts";
 import { selectActiveShare, selectRegionOutlines, selectRowPlace } from "../../state/regionSelectors.ts";
 import { selectNodeFill } from "../../state/selectors.ts";
 import { useWorkbench } from "../useWorkbench.ts";
-import { drawGraph, fitTransform, hitNode } from "./drawGraph.ts";
-import type { View } from "./view.ts";
+import { drawGraph, hitNode } from "./drawGraph.ts";
 import { maxDrawnNodes } from "./drawLimits.ts";
+import { GraphTooLarge } from "./GraphTooLarge.tsx";
+import { GraphToolbar } from "./GraphToolbar.tsx";
 import { installGraphProbe } from "./graphProbe.ts";
 import { pointsInPolygon } from "./pointInPolygon.ts";
 import { registerPictureSource } from "./pictureSource.ts";
 import { fillColors } from "./scales.ts";
-import { useForceLayout, type Layout } from "./useForceLayout.ts";
-import { useLasso } from "./useLasso.ts";
+import { useForceLayout } from "./useForceLayout.ts";
+import { useFrameScheduler } from "./useFrameScheduler.ts";
+import { useGraphFocus, zoomStep } from "./useGraphFocus.ts";
+import { useRowCentring } from "./useRowCentring.ts";
+import { usePointerGestures } from "./usePointerGestures.ts";
+import { useViewTransform } from "./useViewTransform.ts";
+import { toScreen, zoomAround } from "./viewTransform.ts";
 
 const noNodes: readonly number[] = [];
 
-/** The cover graph on a canvas: node area ∝ members, fill by the chosen column's node mean; region outlines, the lasso, the row looked for. */
+/** The cover graph on a canvas: node area ∝ members, fill by the chosen column's node mean; region outlines, the lasso, the row looked for; zoom, pan, pins and keyboard focus. */
 export function ForceGraph() {
   const built = useWorkbench((s) => s.result);
   const tooLarge = built !== null && built.landmarks.length > maxDrawnNodes;
@@ -28,105 +34,136 @@ export function ForceGraph() {
   const activeStyle = useWorkbench((s) => s.regions.findIndex((r) => r.id === s.activeRegionId));
   const place = useWorkbench(selectRowPlace);
   const found = place?.kind === "found" ? place.nodes : noNodes;
+  const busy = useWorkbench((s) => s.build.state === "running" || s.stability.state === "running" || s.loadStatus === "loading");
+  const [seed, setSeed] = useState(1);
+  const [lassoMode, setLassoMode] = useState(false);
+  const [edgeWidthByShared, setEdgeWidthByShared] = useState(false);
   const canvas = useRef<HTMLCanvasElement>(null);
-  const view = useRef<View | null>(null);
-  const marked = useRef<Layout | null>(null);
-  // added to the fitted view by "find a row"; back to zero with every new layout (the next fit) and when the search ends
-  const offset = useRef({ x: 0, y: 0 });
-  const share = shareValues ? { values: shareValues, style: activeStyle } : null;
-  const paint = useRef({ selected, fillOf: fillColors(fill), region, outlines, share, found });
-  paint.current = { selected, fillOf: fillColors(fill), region, outlines, share, found };
+  const view = useViewTransform();
+  const hovered = useRef<number | null>(null);
+  // the layout last drawn, how many drawings so far and the milliseconds they took (read by the probe)
+  const drawn = useRef({ layout: null as unknown, count: 0, ms: 0 });
+  // colours worked out once per colouring, not per frame
+  const fillOf = useMemo(() => {
+    const colourOf = fillColors(fill);
+    const colours = Array.from({ length: result?.landmarks.length ?? 0 }, (_, k) => colourOf(k));
+    return (k: number): string => colours[k] ?? colourOf(k);
+  }, [fill, result]);
+  const size = (): { width: number; height: number } => ({ width: canvas.current?.clientWidth ?? 0, height: canvas.current?.clientHeight ?? 0 });
 
-  const draw = useCallback((layout: Layout) => {
+  const draw = useCallback(() => {
     const element = canvas.current;
+    const current = layout.current;
     const context = element?.getContext("2d");
-    if (!element || !context) return;
+    if (!element || !context || !current) return;
+    const began = performance.now();
     const ratio = window.devicePixelRatio || 1;
-    const width = element.clientWidth;
-    const height = element.clientHeight;
+    const { width, height } = size();
     if (element.width !== Math.round(width * ratio) || element.height !== Math.round(height * ratio)) {
       element.width = Math.round(width * ratio);
       element.height = Math.round(height * ratio);
     }
     context.setTransform(ratio, 0, 0, ratio, 0, 0);
-    if (marked.current !== layout) offset.current = { x: 0, y: 0 };
-    const fit = fitTransform(layout, width, height);
-    view.current = { k: fit.k, x: fit.x + offset.current.x, y: fit.y + offset.current.y };
-    element.dataset.offset = `${offset.current.x},${offset.current.y}`;
-    drawGraph(context, layout, view.current, { width, height, ...paint.current, lasso: lasso.points.current });
-    if (marked.current !== layout) performance.mark("shoal:graph-drawn"); // the first drawing of this result's layout
-    marked.current = layout;
-  }, []); // lasso.points is a ref, read at drawing time
-
-  const busy = useWorkbench((s) => s.build.state === "running" || s.stability.state === "running" || s.loadStatus === "loading");
-  const layout = useForceLayout(result, draw, busy);
-  const lasso = useLasso(
-    (x, y) => !(layout.current && view.current && hitNode(layout.current, view.current, x, y) !== null),
-    () => layout.current && draw(layout.current),
-    (polygon, additive) => {
-      const v = view.current;
+    const v = view.resolve(current, width, height);
+    const offset = view.offset();
+    element.dataset.offset = `${offset.x},${offset.y}`;
+    const { focus: f, ...colours } = paint.current;
+    const labelled = hovered.current ?? (f.active ? f.focused : null);
+    const label = labelled === null || !current.nodes[labelled] ? null : { node: labelled, text: f.captionOf(labelled) };
+    drawGraph(context, current, v, { width, height, ...colours, lasso: gestures.lasso(), focused: f.active ? f.focused : null, label });
+    if (drawn.current.layout !== current) performance.mark("shoal:graph-drawn"); // the first drawing of this layout
+    drawn.current.layout = current;
+    drawn.current.count += 1;
+    drawn.current.ms += performance.now() - began;
+  }, []); // everything it reads is a ref or a stable function
+  const redraw = useFrameScheduler(draw);
+  const { layout, controls, pinned } = useForceLayout(result, redraw, busy, seed);
+  const focus = useGraphFocus(result, fill, { layout: () => layout.current, view, size, redraw });
+  const share = shareValues ? { values: shareValues, style: activeStyle } : null;
+  const paint = useRef({ selected, fillOf, region, outlines, share, found, edgeWidthByShared, focus });
+  paint.current = { selected, fillOf, region, outlines, share, found, edgeWidthByShared, focus };
+  const gestures = usePointerGestures(canvas, !tooLarge, {
+    view: () => view.current(),
+    setView: view.set,
+    nodeAt: (x, y) => (layout.current && view.current() ? hitNode(layout.current, view.current()!, x, y) : null),
+    lassoMode: () => lassoMode,
+    pin: (node, world) => controls.pin(node, world.x, world.y),
+    release: controls.release,
+    finishLasso(polygon, additive) {
+      const v = view.current();
       if (!layout.current || !v) return;
-      const centres = layout.current.nodes.map((n) => ({ index: n.index, x: v.k * n.x + v.x, y: v.k * n.y + v.y }));
+      const centres = layout.current.nodes.map((n) => ({ index: n.index, ...toScreen(v, n) }));
       actions().selectNodes(pointsInPolygon(centres, polygon), additive ? "add" : "replace");
     },
-  );
-  useEffect(() => {
-    if (layout.current) draw(layout.current);
-  }, [selected, fill, region, outlines, shareValues, draw, layout]);
-  // centre the view on the nodes holding the row looked for
-  useEffect(() => {
-    const current = layout.current;
-    const element = canvas.current;
-    if (!current || !element) return;
-    if (found.length === 0) {
-      // the search ended (or found nothing): back to the fitted view
-      if (offset.current.x !== 0 || offset.current.y !== 0) {
-        offset.current = { x: 0, y: 0 };
-        draw(current);
-      }
-      return;
-    }
-    const fit = fitTransform(current, element.clientWidth, element.clientHeight);
-    const nodes = found.map((k) => current.nodes[k]!).filter(Boolean);
-    const cx = nodes.reduce((sum, n) => sum + n.x, 0) / nodes.length;
-    const cy = nodes.reduce((sum, n) => sum + n.y, 0) / nodes.length;
-    offset.current = { x: element.clientWidth / 2 - (fit.k * cx + fit.x), y: element.clientHeight / 2 - (fit.k * cy + fit.y) };
-    draw(current);
-  }, [found, draw, layout]);
+    hover(node) {
+      if (hovered.current === node) return;
+      hovered.current = node;
+      if (canvas.current) canvas.current.style.cursor = node === null ? "" : "pointer";
+      redraw();
+    },
+    redraw,
+  });
+  useEffect(redraw, [selected, fillOf, region, outlines, shareValues, edgeWidthByShared, focus.focused, focus.active, redraw]);
+  useRowCentring(found, layout, view, size, redraw);
   useEffect(() => {
     const element = canvas.current;
     if (!element || typeof ResizeObserver === "undefined") return;
-    const observer = new ResizeObserver(() => layout.current && draw(layout.current));
+    const observer = new ResizeObserver(redraw);
     observer.observe(element);
     return () => observer.disconnect();
-  }, [draw, layout]);
+  }, [redraw, result]);
   useEffect(() => registerPictureSource({ layout: () => layout.current, canvas: () => canvas.current }), [layout]);
-  useEffect(() => installGraphProbe(() => layout.current, () => view.current, () => offset.current), [layout]);
+  useEffect(
+    () => installGraphProbe(() => layout.current, view, { focused: () => paint.current.focus.focused, drawings: () => drawn.current.count, drawingMs: () => drawn.current.ms }),
+    [layout, view],
+  );
 
-  if (tooLarge) {
-    return (
-      <p className="too-large" role="status" data-testid="graph-too-large">
-        This graph has {built.landmarks.length.toLocaleString("en-US")} nodes, more than the {maxDrawnNodes.toLocaleString("en-US")} that can be laid out
-        here without freezing the page. Raise the radius to draw it; its counts, statistics and exports are complete.
-      </p>
-    );
-  }
+  if (tooLarge) return <GraphTooLarge nodes={built.landmarks.length} />;
+  const zoomBy = (factor: number): void => {
+    const v = view.current();
+    if (!v) return;
+    const { width, height } = size();
+    view.set(zoomAround(v, factor, { x: width / 2, y: height / 2 }));
+    redraw();
+  };
   return (
-    <canvas
-      ref={canvas}
-      className="force-graph"
-      data-testid="graph-canvas"
-      role="img"
-      aria-label={result ? `cover graph with ${result.landmarks.length} nodes and ${result.edges.source.length} edges; use the node list to open a node; shift-click adds a node to the selection; drag on empty space to lasso nodes` : "no graph built yet"}
-      onPointerDown={lasso.onPointerDown}
-      onPointerMove={lasso.onPointerMove}
-      onPointerUp={lasso.onPointerUp}
-      onClick={(event) => {
-        if (lasso.justEnded()) return;
-        const rect = event.currentTarget.getBoundingClientRect();
-        const hit = layout.current && view.current ? hitNode(layout.current, view.current, event.clientX - rect.left, event.clientY - rect.top) : null;
-        actions().selectNode(hit, event.shiftKey);
-      }}
-    />
+    <div className="graph-area">
+      {result && (
+        <GraphToolbar
+          onFit={() => (view.fit(), redraw())} onZoom={zoomBy} zoomStep={zoomStep}
+          lassoMode={lassoMode} onLassoMode={setLassoMode}
+          layoutSeed={seed} onNewLayout={() => setSeed((s) => s + 1)}
+          pinned={pinned} onUnpinAll={() => (controls.unpinAll(), redraw())}
+          edgeWidthByShared={edgeWidthByShared} onEdgeWidthByShared={setEdgeWidthByShared}
+        />
+      )}
+      <canvas
+        ref={canvas}
+        className={lassoMode ? "force-graph lasso-mode" : "force-graph"}
+        data-testid="graph-canvas"
+        tabIndex={result ? 0 : -1}
+        role="application"
+        aria-roledescription="cover graph"
+        aria-label={result ? `cover graph with ${result.landmarks.length} nodes and ${result.edges.source.length} edges; arrow keys move between neighbouring nodes, Enter opens the node, + and − zoom, F fits; drag a node to pin it, drag empty space to move the view, shift-drag to lasso` : "no graph built yet"}
+        onFocus={focus.onFocus}
+        onBlur={focus.onBlur}
+        onKeyDown={focus.onKeyDown}
+        onPointerDown={gestures.onPointerDown}
+        onPointerMove={gestures.onPointerMove}
+        onPointerUp={gestures.onPointerUp}
+        onPointerCancel={gestures.onPointerCancel}
+        onPointerLeave={gestures.onPointerLeave}
+        onClick={(event) => {
+          if (gestures.justDragged()) return;
+          const rect = event.currentTarget.getBoundingClientRect();
+          const v = view.current();
+          const hit = layout.current && v ? hitNode(layout.current, v, event.clientX - rect.left, event.clientY - rect.top) : null;
+          actions().selectNode(hit, event.shiftKey);
+        }}
+      />
+      <p className="visually-hidden" aria-live="polite" data-testid="graph-focus-announcement">
+        {focus.announcement}
+      </p>
+    </div>
   );
 }

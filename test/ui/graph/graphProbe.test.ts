@@ -1,9 +1,13 @@
 import "../support/dom.ts";
 import { afterEach, describe, expect, it } from "vitest";
 import { installGraphProbe } from "../../../src/ui/graph/graphProbe.ts";
+import type { ViewTransform } from "../../../src/ui/graph/useViewTransform.ts";
 
 const host = window as unknown as { shoalGraph?: unknown };
-const install = (): (() => void) => installGraphProbe(() => null, () => null, () => ({ x: 0, y: 0 }));
+const view: ViewTransform = {
+  resolve: () => ({ k: 1, x: 0, y: 0 }), current: () => null, offset: () => ({ x: 0, y: 0 }), isFitted: () => true, set() {}, fit() {}, centreOn() {},
+};
+const install = (): (() => void) => installGraphProbe(() => null, view, { focused: () => null, drawings: () => 0, drawingMs: () => 0 });
 
 afterEach(() => window.history.replaceState(null, "", "/"));
 
