@@ -7,6 +7,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { assertClose } from "../assertClose.ts";
+import { nodeRim } from "../../src/core/picture/colourSchemes.ts";
 
 const css = readFileSync(join(process.cwd(), "src/ui/styles.css"), "utf8");
 
@@ -78,6 +79,8 @@ const boundaryPairs: readonly [string, string, string, number][] = [
   ["the focus ring on the side panes", declared(":focus-visible", "outline"), panel, 3],
   ["an invalid field's edge", declared('.setting-field input[aria-invalid="true"]', "border"), panel, 3],
   ["the open node's row outline in the node table", declared('.node-table tr[aria-current="true"]', "outline"), paper, 3],
+  ["a node's rim in the drawing (light cividis fills would not reach 3:1 alone)", nodeRim, paper, 3],
+  ["a node's rim in a saved picture (white ground)", nodeRim, "#ffffff", 3],
 ];
 
 describe("contrast ratios (WCAG 2.2 relative-luminance formula)", () => {

@@ -12,6 +12,7 @@ export const missingColor = "#cfcac0"; // warm grey: no member has a value
 export const plainColor = "#7d8fa3"; // slate, when nothing is chosen to colour by
 export const otherColor = "#b9b2a4"; // levels beyond the palette
 export const ink = "#23272f"; // --ink in styles.css
+export const nodeRim = "#5a5f68"; // node outline: at least 3:1 against the page (#f4f1ea) and a white picture, so light fills keep a visible edge
 
 // M. Okabe and K. Ito, "Color Universal Design", J*Fly, 2008 (the eight-colour set, black last)
 export const okabeIto = ["#E69F00", "#56B4E9", "#009E73", "#F0E442", "#0072B2", "#D55E00", "#CC79A7", "#000000"] as const;

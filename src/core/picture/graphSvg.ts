@@ -1,6 +1,6 @@
 import { escapeXml } from "../export/escapeXml.ts";
 import { cieLightness } from "./cieLightness.ts";
-import { ink, levelColor, levelGrey, missingColor, outlineGap, outlineStyle, plainColor } from "./colourSchemes.ts";
+import { ink, nodeRim, levelColor, levelGrey, missingColor, outlineGap, outlineStyle, plainColor } from "./colourSchemes.ts";
 import type { FrameTransform } from "./fitFrame.ts";
 import { nodeColorScale } from "./nodeColorScale.ts";
 import type { PictureInput } from "./pictureTypes.ts";
@@ -49,7 +49,7 @@ export function graphSvg(input: PictureInput, frame: FrameTransform): string[] {
     const s = source[e]!, t = target[e]!;
     out.push(`<line x1="${px(s)}" y1="${py(s)}" x2="${px(t)}" y2="${py(t)}" stroke-width="${f(width)}"/>`);
   }
-  out.push("</g>", '<g class="nodes" stroke="#f7f4ec" stroke-width="1">');
+  out.push("</g>", `<g class="nodes" stroke="${nodeRim}" stroke-width="1">`);
   const looks = nodeLooks(input, n);
   for (let i = 0; i < n; ++i) {
     const look = looks[i]!;

@@ -3,6 +3,7 @@ import { drawNodeLabel, drawNodeNumbers } from "./drawNodeLabels.ts";
 import { edgeBatches, fillBatches } from "./drawBatches.ts";
 import type { Layout, LayoutNode } from "./useForceLayout.ts";
 import type { View } from "./view.ts";
+import { nodeRim } from "./scales.ts";
 
 /** Fits the layout's bounding box (with node radii) into the canvas with a margin; never zooms past 1.6×. */
 export function fitTransform(layout: Layout, width: number, height: number, margin = 16): View {
@@ -112,7 +113,8 @@ export function drawGraph(context: CanvasRenderingContext2D, layout: Layout, vie
     context.fill();
   }
   context.lineWidth = 1 / view.k;
-  context.strokeStyle = "#f7f4ec";
+  // a dark rim: light fills (the top of cividis) keep a 3:1 boundary against the page (WCAG 2.2, 1.4.11)
+  context.strokeStyle = nodeRim;
   context.beginPath();
   for (const node of layout.nodes) {
     if (!isShown(node)) continue;

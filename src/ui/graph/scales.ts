@@ -3,7 +3,7 @@ import { levelColor, missingColor, plainColor } from "../../core/picture/colourS
 import { nodeColorScale } from "../../core/picture/nodeColorScale.ts";
 
 // The schemes live in core (core/picture/colourSchemes.ts), shared with the saved picture and `shoal draw`
-export { categoricalSchemeName, colorSchemeName, levelColor, missingColor, okabeIto, otherColor, plainColor } from "../../core/picture/colourSchemes.ts";
+export { categoricalSchemeName, colorSchemeName, levelColor, missingColor, nodeRim, okabeIto, otherColor, plainColor } from "../../core/picture/colourSchemes.ts";
 export { nodeColorScale } from "../../core/picture/nodeColorScale.ts";
 export { nodeRadius } from "../../core/picture/nodeRadius.ts";
 
