@@ -1,5 +1,6 @@
 import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
 import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
+import { parseDecimalSpan } from "./parseDecimalSpan.ts";
 import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
 
 /** Raw code of an empty cell: not a dictionary entry. */
@@ -44,8 +45,11 @@ export class ColumnBuilder {
   readonly firstNumbers: string[] = [];
   readonly firstTokens: KeptCell[] = [];
   readonly firstNotNumbers: KeptCell[] = [];
+  /** Char code of the decimal mark, for `parseDecimalSpan`. */
+  private readonly mark: number;
 
   constructor(readonly decimal: DecimalMark, numbersOnly = false) {
+    this.mark = decimal === "," ? 44 : 46;
     this.dictionary = numbersOnly ? null : new Map();
     this.rawCodes = numbersOnly ? null : new GrowableUint32();
     if (numbersOnly) this.numberSet = new Set();
@@ -79,6 +83,32 @@ export class ColumnBuilder {
       this.sparseTexts!.push(detach(cell));
     }
     if (this.list && (row & 4095) === 4095 && this.looksNumeric()) this.leaveList();
+  }
+
+  /**
+   * Adds the cell text[start, end) as `push` does, but without cutting it out of the text when it
+   * need not be kept: in "sparse" form, once the first cells are kept for the report, a plain
+   * decimal that Clinger's fast path reads (`parseDecimalSpan`) and that is not an integer
+   * written otherwise than in its shortest form is only counted. Every other cell goes to `push`.
+   */
+  pushSpan(text: string, start: number, end: number, line: number): void {
+    if (this.sparseRows !== null && this.firstNumbers.length === shownCells && this.firstValues.length === shownCells) {
+      const value = parseDecimalSpan(text, start, end, this.mark);
+      if (value === value) {
+        const integer = Number.isInteger(value);
+        if (!integer || isPlainInteger(text, start, end)) {
+          this.rows++;
+          this.numbers.push(value);
+          this.numeric++;
+          if (!integer) this.nonIntegers++;
+          if (value < this.min) this.min = value;
+          if (value > this.max) this.max = value;
+          if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+          return;
+        }
+      }
+    }
+    this.push(text.slice(start, end), line);
   }
 
   /** Adds a number read as a number (Parquet); NaN and ±Infinity count as missing tokens. */
@@ -161,17 +191,17 @@ export class ColumnBuilder {
 /** True for a cell whose text a sparse column keeps: a token, text, or an integer not written in its shortest form. */
 export function keepsText(kind: CellKind, value: number, cell: string): boolean {
   if (kind === CellKind.token || kind === CellKind.text) return true;
-  return kind === CellKind.number && Number.isInteger(value) && !isPlainInteger(cell) && cell !== String(value);
+  return kind === CellKind.number && Number.isInteger(value) && !isPlainInteger(cell, 0, cell.length) && cell !== String(value);
 }
 
-// Digits with an optional minus sign, no leading zero, at most 15 digits: exactly String(value) for such an integer.
-function isPlainInteger(cell: string): boolean {
-  const start = cell.charCodeAt(0) === 45 ? 1 : 0; // "-"
-  const digits = cell.length - start;
+// text[start, end) is digits with an optional minus sign, no leading zero, at most 15 digits: exactly String(value) for such an integer.
+function isPlainInteger(text: string, start: number, end: number): boolean {
+  const first = start < end && text.charCodeAt(start) === 45 ? start + 1 : start; // "-"
+  const digits = end - first;
   if (digits < 1 || digits > 15) return false;
-  if (cell.charCodeAt(start) === 48) return digits === 1 && start === 0; // "0" alone
-  for (let k = start; k < cell.length; ++k) {
-    const c = cell.charCodeAt(k);
+  if (text.charCodeAt(first) === 48) return digits === 1 && first === start; // "0" alone
+  for (let k = first; k < end; ++k) {
+    const c = text.charCodeAt(k);
     if (c < 48 || c > 57) return false;
   }
   return true;
