@@ -57,22 +57,31 @@ export function chunkParser(delimiter: Delimiter, sink: TakeRecords, nextLine: (
     if (records.length > 0) sink(records, [...new Set(malformed)], text.includes('"'));
     keep(last ? "" : text.slice(parsed.meta.cursor));
   };
-  // Lines before the first quote go to `plain`; from the line holding it on, papaparse reads.
-  const split = (text: string, last: boolean): void => {
-    const quote = text.indexOf('"');
-    const cut = quote === -1 ? (last ? text.length : text.lastIndexOf("\n") + 1) : text.lastIndexOf("\n", quote) + 1;
-    if (cut > 0) plain!(text, 0, cut);
+  // Lines of text[from…] before the first quote go to `plain`; from the line holding it on, papaparse reads.
+  const split = (text: string, from: number, last: boolean): void => {
+    const quote = text.indexOf('"', from);
+    const cut = Math.max(from, quote === -1 ? (last ? text.length : text.lastIndexOf("\n") + 1) : text.lastIndexOf("\n", quote) + 1);
+    if (cut > from) plain!(text, from, cut);
     if (quote === -1) keep(text.slice(cut));
-    else run(cut > 0 ? text.slice(cut) : text, last);
+    else run(text.slice(cut), last);
+  };
+  // The carried partial line is completed apart, so that a long chunk is read where it lies rather than copied.
+  const pushPlain = (text: string): void => {
+    const lineEnd = text.indexOf("\n");
+    if (carry === "" || lineEnd === -1 || carry.includes('"') || text.lastIndexOf('"', lineEnd) !== -1) return split(carry + text, 0, false);
+    const head = carry + text.slice(0, lineEnd + 1);
+    carry = "";
+    plain!(head, 0, head.length);
+    split(text, lineEnd + 1, false);
   };
   return {
     push(text) {
       if (text === "") return;
-      if (plain) split(carry + text, false);
+      if (plain) pushPlain(text);
       else run(carry + text, false);
     },
     finish() {
-      if (plain) split(carry, true);
+      if (plain) split(carry, 0, true);
       else run(carry, true);
     },
   };

@@ -1,6 +1,6 @@
 import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
 import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
-import { parseDecimalSpan } from "./parseDecimalSpan.ts";
+import { scanDecimal, scanned } from "./scanDecimal.ts";
 import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
 
 /** Raw code of an empty cell: not a dictionary entry. */
@@ -86,29 +86,34 @@ export class ColumnBuilder {
   }
 
   /**
-   * Adds the cell text[start, end) as `push` does, but without cutting it out of the text when it
-   * need not be kept: in "sparse" form, once the first cells are kept for the report, a plain
-   * decimal that Clinger's fast path reads (`parseDecimalSpan`) and that is not an integer
-   * written otherwise than in its shortest form is only counted. Every other cell goes to `push`.
+   * Adds the cell that starts at text[start] and ends at `stop` or at the first `separator`, if it
+   * need not be kept as text, and returns the index where it ends; otherwise adds nothing and
+   * returns −1 (the caller cuts the cell out and calls `push`). A cell need not be kept when the
+   * column is in "sparse" form with its first cells kept for the report, and the cell is a plain
+   * decimal (`scanDecimal`; `Number()` on its text when it has more than 15 significant digits or
+   * a large exponent) that is finite and not an integer written otherwise than in its shortest form.
+   * Such a cell is counted exactly as `push` would count it. Borrows `text` for the call only.
    */
-  pushSpan(text: string, start: number, end: number, line: number): void {
-    if (this.sparseRows !== null && this.firstNumbers.length === shownCells && this.firstValues.length === shownCells) {
-      const value = parseDecimalSpan(text, start, end, this.mark);
-      if (value === value) {
-        const integer = Number.isInteger(value);
-        if (!integer || isPlainInteger(text, start, end)) {
-          this.rows++;
-          this.numbers.push(value);
-          this.numeric++;
-          if (!integer) this.nonIntegers++;
-          if (value < this.min) this.min = value;
-          if (value > this.max) this.max = value;
-          if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
-          return;
-        }
-      }
+  takeNumberAt(text: string, start: number, stop: number, separator: number): number {
+    if (this.sparseRows === null || this.firstNumbers.length !== shownCells || this.firstValues.length !== shownCells) return -1;
+    let value = scanDecimal(text, start, stop, this.mark === separator ? -1 : this.mark);
+    const end = scanned.end;
+    if (end === -1 || (end !== stop && text.charCodeAt(end) !== separator)) return -1;
+    if (value !== value) {
+      const cell = text.slice(start, end);
+      value = Number(this.mark === 44 ? cell.replace(",", ".") : cell);
+      if (!Number.isFinite(value)) return -1;
     }
-    this.push(text.slice(start, end), line);
+    const integer = Number.isInteger(value);
+    if (integer && !isPlainInteger(text, start, end)) return -1;
+    this.rows++;
+    this.numbers.push(value);
+    this.numeric++;
+    if (!integer) this.nonIntegers++;
+    if (value < this.min) this.min = value;
+    if (value > this.max) this.max = value;
+    if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+    return end;
   }
 
   /** Adds a number read as a number (Parquet); NaN and ±Infinity count as missing tokens. */

@@ -1,4 +1,4 @@
-import { parseDecimalSpan } from "./parseDecimalSpan.ts";
+import { scanDecimal, scanned } from "./scanDecimal.ts";
 import type { DecimalMark } from "./readOptions.ts";
 
 // Plain decimal with optional sign, fraction and exponent, surrounded by optional white space
@@ -11,13 +11,13 @@ const commaDecimal = /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/;
  * Parses one cell as a finite decimal number, or returns NaN (a missing value).
  * With `decimal` "," the cell must use a comma as its decimal mark ("12,5"); no thousands
  * separators are read in either mode. Numbers beyond ±1.8e308 are NaN.
- * Common cells take Clinger's fast path (`parseDecimalSpan`); the rest go through `Number()`,
+ * Common cells take Clinger's fast path (`scanDecimal`); the rest go through `Number()`,
  * so every value is exactly what `Number()` gives for the text (with "," read as ".").
  * @example parseNumber("12,5", ",") // => 12.5
  */
 export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
-  const fast = parseDecimalSpan(cell, 0, cell.length, decimal === "," ? 44 : 46);
-  if (fast === fast) return fast;
+  const fast = scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46);
+  if (fast === fast && scanned.end === cell.length) return fast;
   if (decimal === ",") {
     if (!commaDecimal.test(cell)) return NaN;
     const value = Number(cell.replace(",", "."));

@@ -34,8 +34,8 @@ export class RecordSink {
   /**
    * Takes the records of text[from, to), which holds no quote character: each line up to a "\n"
    * (and the rest, if `to` is not after one) is one record, its fields split at `delimiter`, exactly
-   * the records `take` would get from the chunk parser, but without a string per field: each
-   * cell goes to its builder as a span of the text (`ColumnBuilder.pushSpan`).
+   * the records `take` would get from the chunk parser, but without a string per numeric cell:
+   * each builder first tries to read its cell in place (`ColumnBuilder.takeNumberAt`).
    * O(to − from); borrows `text` for the call only.
    */
   takePlain(text: string, from: number, to: number, delimiter: string): void {
@@ -55,13 +55,18 @@ export class RecordSink {
         const builders = this.builders;
         const width = builders.length;
         let fields = 0;
-        let cell = start;
-        for (let p = start; p <= stop; ++p) {
-          if (p < stop && text.charCodeAt(p) !== separator) continue;
-          if (fields < width) builders[fields]!.pushSpan(text, cell, p, line);
-          fields++;
-          cell = p + 1;
+        for (let p = start; ; ++fields) {
+          const builder = fields < width ? builders[fields]! : null;
+          let end = builder ? builder.takeNumberAt(text, p, stop, separator) : -1;
+          if (end === -1) {
+            end = p;
+            while (end < stop && text.charCodeAt(end) !== separator) end++;
+            if (builder) builder.push(text.slice(p, end), line);
+          }
+          if (end === stop) break;
+          p = end + 1;
         }
+        fields++;
         for (let j = fields; j < width; ++j) builders[j]!.push("", line);
         if (fields !== width && this.raggedCount++ < shownCells) this.ragged.push({ row, line, fields });
       }

@@ -1,25 +1,30 @@
 // 10^0 … 10^22: every one is exact in binary64, since 5^22 < 2^53 (Clinger 1990, section 5).
 const powersOfTen = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
-const maxDigits = 15; // 10^15 − 1 < 2^53, so the integer of up to 15 significant digits is exact
+const maxDigits = 15; // 10^15 − 1 < 2^53, so an integer of up to 15 significant digits is exact
+
+/** Where the last `scanDecimal` stopped: the index after the decimal it read, or −1 when the text there is none. */
+export const scanned = { end: -1 };
 
 /**
- * Clinger's fast path for reading a decimal: the value of text[start, end) when that span is
+ * Reads the plain decimal that starts at text[start] and ends before `end` or at the first
+ * character that cannot continue it:
  *   [+-]? digits [mark digits] [(e|E) [+-]? digits]   (at least one digit before the exponent)
- * with at most 15 significant digits w and a net power of ten p (exponent minus fraction digits)
- * with |p| ≤ 22. Then w and 10^|p| are both exact doubles and one IEEE multiplication (p ≥ 0) or
- * division (p < 0) rounds the exact quotient once, to nearest even: the value is bit for bit
- * what `Number()` gives for the same text.
+ * and sets `scanned.end` to the index after it (−1 when there is no such decimal at `start`).
+ * The value is returned by Clinger's fast path when the decimal has at most 15 significant digits
+ * w and a net power of ten p (exponent minus fraction digits) with |p| ≤ 22: w and 10^|p| are then
+ * exact doubles, and one IEEE multiplication (p ≥ 0) or division (p < 0) rounds the exact value
+ * once, to nearest even, so the result is bit for bit what `Number()` gives for the same text.
+ * Otherwise it returns NaN with `scanned.end` still set: a decimal, but not decided here (more
+ * digits, a larger exponent); the caller then asks `Number()`. A zero mantissa gives 0 or −0.
  * Source: W. D. Clinger, "How to read floating point numbers accurately", PLDI 1990, pp. 92–101
- * (the fast path of section 5). O(end − start), no allocation.
- * Anything else (white space, more digits, a larger exponent, another character) returns NaN,
- * meaning "not decided here": the caller falls back to `Number()` on the text. `mark` is the
- * char code of the decimal mark (46 for ".", 44 for ","). A zero mantissa gives 0 or −0.
- * @example parseDecimalSpan("x;0,1;y", 2, 5, 44) // => 0.1
+ * (the fast path of section 5). `mark` is the char code of the decimal mark (46 ".", 44 ",").
+ * O(length of the decimal), no allocation; writes only `scanned`.
+ * @example scanDecimal("x;0,1;y", 2, 7, 44) // => 0.1 (and scanned.end is 5)
  */
-export function parseDecimalSpan(text: string, start: number, end: number, mark: number): number {
-  if (start >= end) return NaN;
+export function scanDecimal(text: string, start: number, end: number, mark: number): number {
+  scanned.end = -1;
   let p = start;
-  let c = text.charCodeAt(p);
+  let c = p < end ? text.charCodeAt(p) : 0;
   let negative = false;
   if (c === 45 || c === 43) {
     negative = c === 45; // "-"
@@ -49,7 +54,7 @@ export function parseDecimalSpan(text: string, start: number, end: number, mark:
       c = ++p < end ? text.charCodeAt(p) : 0;
     }
   }
-  if (digits === 0 || significant > maxDigits) return NaN;
+  if (digits === 0) return NaN;
   let exponent = 0;
   if (c === 101 || c === 69) {
     c = ++p < end ? text.charCodeAt(p) : 0;
@@ -66,7 +71,8 @@ export function parseDecimalSpan(text: string, start: number, end: number, mark:
     if (p === first) return NaN;
     if (exponentNegative) exponent = -exponent;
   }
-  if (p !== end) return NaN;
+  scanned.end = p;
+  if (significant > maxDigits) return NaN;
   const power = exponent - fraction;
   let value: number;
   if (mantissa === 0) value = 0;
