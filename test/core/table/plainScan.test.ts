@@ -69,7 +69,7 @@ function expectSameOutcome(plain: Result, reference: Result): void {
   expect(plain).toEqual(reference);
   if ("error" in plain || "error" in reference) return;
   for (const [j, column] of plain.table.columns.entries()) {
-    const other = reference.table.columns[j]!.numbers;
+    const other: Float64Array = reference.table.columns[j]!.numbers;
     for (let i = 0; i < column.numbers.length; ++i) if (bitsOf(column.numbers[i]!) !== bitsOf(other[i]!)) expect.fail(`row ${i} of column ${column.name}: ${column.numbers[i]} read in place, ${other[i]} by papaparse`);
   }
 }
