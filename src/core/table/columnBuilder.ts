@@ -1,6 +1,6 @@
 import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
 import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
-import { scanDecimal, scanned } from "./scanDecimal.ts";
+import { scanDecimal, scannedValue } from "./scanDecimal.ts";
 import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
 
 /** Raw code of an empty cell: not a dictionary entry. */
@@ -96,9 +96,9 @@ export class ColumnBuilder {
    */
   takeNumberAt(text: string, start: number, stop: number, separator: number): number {
     if (this.sparseRows === null || this.firstNumbers.length !== shownCells || this.firstValues.length !== shownCells) return -1;
-    let value = scanDecimal(text, start, stop, this.mark === separator ? -1 : this.mark);
-    const end = scanned.end;
+    const end = scanDecimal(text, start, stop, this.mark === separator ? -1 : this.mark);
     if (end === -1 || (end !== stop && text.charCodeAt(end) !== separator)) return -1;
+    let value = scannedValue[0]!;
     if (value !== value) {
       const cell = text.slice(start, end);
       value = Number(this.mark === 44 ? cell.replace(",", ".") : cell);

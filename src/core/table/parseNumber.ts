@@ -1,4 +1,4 @@
-import { scanDecimal, scanned } from "./scanDecimal.ts";
+import { scanDecimal, scannedValue } from "./scanDecimal.ts";
 import type { DecimalMark } from "./readOptions.ts";
 
 // Plain decimal with optional sign, fraction and exponent, surrounded by optional white space
@@ -16,8 +16,10 @@ const commaDecimal = /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/;
  * @example parseNumber("12,5", ",") // => 12.5
  */
 export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
-  const fast = scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46);
-  if (fast === fast && scanned.end === cell.length) return fast;
+  if (scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46) === cell.length) {
+    const fast = scannedValue[0]!;
+    if (fast === fast) return fast;
+  }
   if (decimal === ",") {
     if (!commaDecimal.test(cell)) return NaN;
     const value = Number(cell.replace(",", "."));

@@ -2,27 +2,28 @@
 const powersOfTen = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
 const maxDigits = 15; // 10^15 − 1 < 2^53, so an integer of up to 15 significant digits is exact
 
-/** Where the last `scanDecimal` stopped: the index after the decimal it read, or −1 when the text there is none. */
-export const scanned = { end: -1 };
+/** The value the last `scanDecimal` read, or NaN when it did not decide (a typed array, so that storing it allocates nothing). */
+export const scannedValue = new Float64Array(1);
 
 /**
  * Reads the plain decimal that starts at text[start] and ends before `end` or at the first
  * character that cannot continue it:
  *   [+-]? digits [mark digits] [(e|E) [+-]? digits]   (at least one digit before the exponent)
- * and sets `scanned.end` to the index after it (−1 when there is no such decimal at `start`).
- * The value is returned by Clinger's fast path when the decimal has at most 15 significant digits
+ * and returns the index after it (−1 when there is no such decimal at `start`). Its value is
+ * written to `scannedValue[0]` by Clinger's fast path when the decimal has at most 15 significant digits
  * w and a net power of ten p (exponent minus fraction digits) with |p| ≤ 22: w and 10^|p| are then
  * exact doubles, and one IEEE multiplication (p ≥ 0) or division (p < 0) rounds the exact value
  * once, to nearest even, so the result is bit for bit what `Number()` gives for the same text.
- * Otherwise it returns NaN with `scanned.end` still set: a decimal, but not decided here (more
- * digits, a larger exponent); the caller then asks `Number()`. A zero mantissa gives 0 or −0.
+ * Otherwise the value is NaN: a decimal, but not decided here (more digits, a larger exponent);
+ * the caller then asks `Number()`. A zero mantissa gives 0 or −0.
  * Source: W. D. Clinger, "How to read floating point numbers accurately", PLDI 1990, pp. 92–101
  * (the fast path of section 5). `mark` is the char code of the decimal mark (46 ".", 44 ",").
- * O(length of the decimal), no allocation; writes only `scanned`.
- * @example scanDecimal("x;0,1;y", 2, 7, 44) // => 0.1 (and scanned.end is 5)
+ * O(length of the decimal), no allocation (a double returned from a call that is not inlined
+ * would be boxed); writes only `scannedValue`.
+ * @example scanDecimal("x;0,1;y", 2, 7, 44) // => 5 (and scannedValue[0] is 0.1)
  */
 export function scanDecimal(text: string, start: number, end: number, mark: number): number {
-  scanned.end = -1;
+  scannedValue[0] = NaN;
   let p = start;
   let c = p < end ? text.charCodeAt(p) : 0;
   let negative = false;
@@ -54,7 +55,7 @@ export function scanDecimal(text: string, start: number, end: number, mark: numb
       c = ++p < end ? text.charCodeAt(p) : 0;
     }
   }
-  if (digits === 0) return NaN;
+  if (digits === 0) return -1;
   let exponent = 0;
   if (c === 101 || c === 69) {
     c = ++p < end ? text.charCodeAt(p) : 0;
@@ -68,16 +69,16 @@ export function scanDecimal(text: string, start: number, end: number, mark: numb
       if (exponent < 1e6) exponent = exponent * 10 + (c - 48);
       c = ++p < end ? text.charCodeAt(p) : 0;
     }
-    if (p === first) return NaN;
+    if (p === first) return -1;
     if (exponentNegative) exponent = -exponent;
   }
-  scanned.end = p;
-  if (significant > maxDigits) return NaN;
+  if (significant > maxDigits) return p;
   const power = exponent - fraction;
   let value: number;
   if (mantissa === 0) value = 0;
   else if (power >= 0 && power <= 22) value = mantissa * powersOfTen[power]!;
   else if (power < 0 && power >= -22) value = mantissa / powersOfTen[-power]!;
-  else return NaN;
-  return negative ? -value : value;
+  else return p;
+  scannedValue[0] = negative ? -value : value;
+  return p;
 }

@@ -1,16 +1,23 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { scanDecimal, scanned } from "../../../src/core/table/scanDecimal.ts";
+import { scanDecimal, scannedValue } from "../../../src/core/table/scanDecimal.ts";
 import { decimalText } from "./decimalTexts.ts";
 import { bitsOf, exactDecimal } from "./exactDecimal.ts";
+
+let lastEnd = -1;
+/** The value scanDecimal wrote (NaN: not decided), keeping the index it returned in `lastEnd`. */
+function scan(text: string, start: number, end: number, mark: number): number {
+  lastEnd = scanDecimal(text, start, end, mark);
+  return scannedValue[0]!;
+}
 
 describe("scanDecimal: Clinger's fast path", () => {
   it("a value it returns has the same 64 bits as Number() and as exact BigInt rounding, for random decimals (many digits, exponents near ±22 and ±308, signs, leading zeros)", () => {
     let decided = 0;
     fc.assert(
       fc.property(decimalText, ({ text, negative, digits, power }) => {
-        const value = scanDecimal(text, 0, text.length, 46);
-        expect(scanned.end).toBe(text.length); // every generated text is a plain decimal
+        const value = scan(text, 0, text.length, 46);
+        expect(lastEnd).toBe(text.length); // every generated text is a plain decimal
         if (value !== value) return; // not decided here: the reader asks Number()
         decided++;
         expect(bitsOf(value)).toBe(bitsOf(Number(text))); // reference: Number(), correctly rounded in V8
@@ -31,13 +38,13 @@ describe("scanDecimal: Clinger's fast path", () => {
   });
 
   it("decides every decimal of at most 15 significant digits and |power of ten| ≤ 22, and declines 16 digits and power 23", () => {
-    expect(scanDecimal("999999999999999", 0, 15, 46)).toBe(999999999999999); // 15 digits, worked by hand
-    expect(scanDecimal("9007199254740993", 0, 16, 46)).toBeNaN(); // 16 digits (2^53 + 1): left to Number()
-    expect(scanDecimal("1e22", 0, 4, 46)).toBe(1e22); // 10^22 is exact (5^22 < 2^53), Clinger 1990 section 5
-    expect(scanDecimal("1e23", 0, 4, 46)).toBeNaN(); // 10^23 is not exact in binary64: left to Number()
-    expect(scanDecimal("1e-22", 0, 5, 46)).toBe(1e-22); // one division by the exact 10^22
-    expect(scanDecimal("0.000000000000000000000001", 0, 26, 46)).toBeNaN(); // power −24: left to Number()
-    expect(scanDecimal("000000000000000000000012.5", 0, 26, 46)).toBe(12.5); // leading zeros are not significant, worked by hand
+    expect(scan("999999999999999", 0, 15, 46)).toBe(999999999999999); // 15 digits, worked by hand
+    expect(scan("9007199254740993", 0, 16, 46)).toBeNaN(); // 16 digits (2^53 + 1): left to Number()
+    expect(scan("1e22", 0, 4, 46)).toBe(1e22); // 10^22 is exact (5^22 < 2^53), Clinger 1990 section 5
+    expect(scan("1e23", 0, 4, 46)).toBeNaN(); // 10^23 is not exact in binary64: left to Number()
+    expect(scan("1e-22", 0, 5, 46)).toBe(1e-22); // one division by the exact 10^22
+    expect(scan("0.000000000000000000000001", 0, 26, 46)).toBeNaN(); // power −24: left to Number()
+    expect(scan("000000000000000000000012.5", 0, 26, 46)).toBe(12.5); // leading zeros are not significant, worked by hand
   });
 
   it.each([
@@ -50,7 +57,7 @@ describe("scanDecimal: Clinger's fast path", () => {
     ["-0.0e5", "0x8000000000000000"], // negative zero, worked by hand
   ])("reads %j with the bits %s, the same as Number() and exact rounding", (text, hex) => {
     const bits = BigInt(hex);
-    expect(bitsOf(scanDecimal(text, 0, text.length, 46))).toBe(bits);
+    expect(bitsOf(scan(text, 0, text.length, 46))).toBe(bits);
     expect(bitsOf(Number(text))).toBe(bits); // the same bits from Number()
     const [mantissa = "", exponent = "0"] = text.replace(/^-/, "").split(/e/i);
     const [whole = "", fraction = ""] = mantissa.split(".");
@@ -65,7 +72,7 @@ describe("scanDecimal: Clinger's fast path", () => {
       value += digit * scale;
     }
     expect(value).toBe(5.609999999999999); // worked by hand (and printed by Node)
-    expect(scanDecimal("5.61", 0, 4, 46)).toBe(Number("5.61"));
+    expect(scan("5.61", 0, 4, 46)).toBe(Number("5.61"));
   });
 
   it("a 17-digit mantissa accumulated in a double misreads 0.46185639482223340 (one ulp high), so 17 digits go to Number()", () => {
@@ -74,29 +81,29 @@ describe("scanDecimal: Clinger's fast path", () => {
     for (const c of text.slice(2)) mantissa = mantissa * 10 + Number(c); // passes 2^53: the last steps round
     expect(bitsOf(mantissa / 1e17)).toBe(0x3fdd8f0e1fcd6fedn); // computed by Node; one ulp above the exact value
     expect(bitsOf(exactDecimal(false, 46185639482223340n, -17))).toBe(0x3fdd8f0e1fcd6fecn); // reference: exact BigInt rounding
-    expect(scanDecimal(text, 0, text.length, 46)).toBeNaN(); // declined (17 significant digits)
+    expect(scan(text, 0, text.length, 46)).toBeNaN(); // declined (17 significant digits)
     expect(bitsOf(Number(text))).toBe(0x3fdd8f0e1fcd6fecn); // what the reader then uses, equal to the exact value
   });
 
   it("reads with a decimal comma when the mark is 44, and stops at a point there", () => {
-    expect(scanDecimal("12,5", 0, 4, 44)).toBe(12.5); // worked by hand
-    expect(scanDecimal("12.5", 0, 4, 44)).toBe(12);
-    expect(scanned.end).toBe(2); // the decimal is "12"; the caller sees that the cell goes on
+    expect(scan("12,5", 0, 4, 44)).toBe(12.5); // worked by hand
+    expect(scan("12.5", 0, 4, 44)).toBe(12);
+    expect(lastEnd).toBe(2); // the decimal is "12"; the caller sees that the cell goes on
   });
 
-  it("reads a decimal inside a longer text and reports where it ends: 0,1 between semicolons ends at index 5", () => {
-    expect(scanDecimal("x;0,1;y", 2, 7, 44)).toBe(0.1); // worked by hand
-    expect(scanned.end).toBe(5); // worked by hand
+  it("reads a decimal inside a longer text and returns where it ends: 0,1 between semicolons ends at index 5", () => {
+    expect(scan("x;0,1;y", 2, 7, 44)).toBe(0.1); // worked by hand
+    expect(lastEnd).toBe(5); // worked by hand
   });
 
   it.each(["", "+", "-", ".", "e5", "1e", "1e+", "x1", " 1"])("finds no decimal at the start of %j (end −1)", (text) => {
-    expect(scanDecimal(text, 0, text.length, 46)).toBeNaN();
-    expect(scanned.end).toBe(-1);
+    expect(scan(text, 0, text.length, 46)).toBeNaN();
+    expect(lastEnd).toBe(-1);
   });
 
   it("declines 17 significant digits but still finds their end (the reader then asks Number())", () => {
     const text = "0.12345678901234567;";
-    expect(scanDecimal(text, 0, text.length, 46)).toBeNaN();
-    expect(scanned.end).toBe(19); // worked by hand: "0." and 17 digits
+    expect(scan(text, 0, text.length, 46)).toBeNaN();
+    expect(lastEnd).toBe(19); // worked by hand: "0." and 17 digits
   });
 });
