@@ -45,8 +45,10 @@ export class ColumnBuilder {
   readonly firstNumbers: string[] = [];
   readonly firstTokens: KeptCell[] = [];
   readonly firstNotNumbers: KeptCell[] = [];
-  /** Char code of the decimal mark, for `parseDecimalSpan`. */
+  /** Char code of the decimal mark, for `scanDecimal`. */
   private readonly mark: number;
+  /** True once `takeNumberAt` may count cells without their text: "sparse" form, first cells kept. */
+  private inPlace = false;
 
   constructor(readonly decimal: DecimalMark, numbersOnly = false) {
     this.mark = decimal === "," ? 44 : 46;
@@ -83,6 +85,7 @@ export class ColumnBuilder {
       this.sparseTexts!.push(detach(cell));
     }
     if (this.list && (row & 4095) === 4095 && this.looksNumeric()) this.leaveList();
+    if (this.sparseRows) this.inPlace = this.firstNumbers.length === shownCells && this.firstValues.length === shownCells;
   }
 
   /**
@@ -95,7 +98,7 @@ export class ColumnBuilder {
    * Such a cell is counted exactly as `push` would count it. Borrows `text` for the call only.
    */
   takeNumberAt(text: string, start: number, stop: number, separator: number): number {
-    if (this.sparseRows === null || this.firstNumbers.length !== shownCells || this.firstValues.length !== shownCells) return -1;
+    if (!this.inPlace) return -1;
     const end = scanDecimal(text, start, stop, this.mark === separator ? -1 : this.mark);
     if (end === -1 || (end !== stop && text.charCodeAt(end) !== separator)) return -1;
     let value = scannedValue[0]!;
