@@ -1,6 +1,6 @@
 // 10^0 … 10^22: every one is exact in binary64, since 5^22 < 2^53 (Clinger 1990, section 5).
 const powersOfTen = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
-const maxDigits = 15; // 10^15 − 1 < 2^53, so an integer of up to 15 significant digits is exact
+const exactLimit = 2 ** 53; // integers below it are exact in binary64, and so is every step w·10 + d on the way up
 
 /** The value the last `scanDecimal` read, or NaN when it did not decide (a typed array, so that storing it allocates nothing). */
 export const scannedValue = new Float64Array(1);
@@ -10,11 +10,11 @@ export const scannedValue = new Float64Array(1);
  * character that cannot continue it:
  *   [+-]? digits [mark digits] [(e|E) [+-]? digits]   (at least one digit before the exponent)
  * and returns the index after it (−1 when there is no such decimal at `start`). Its value is
- * written to `scannedValue[0]` by Clinger's fast path when the decimal has at most 15 significant digits
- * w and a net power of ten p (exponent minus fraction digits) with |p| ≤ 22: w and 10^|p| are then
- * exact doubles, and one IEEE multiplication (p ≥ 0) or division (p < 0) rounds the exact value
+ * written to `scannedValue[0]` by Clinger's fast path when its digits, read as an integer w, are
+ * below 2^53 (every decimal of up to 15 significant digits, most of 16) and its net power of ten p
+ * (exponent minus fraction digits) has |p| ≤ 22: w and 10^|p| are then exact doubles, and one IEEE multiplication (p ≥ 0) or division (p < 0) rounds the exact value
  * once, to nearest even, so the result is bit for bit what `Number()` gives for the same text.
- * Otherwise the value is NaN: a decimal, but not decided here (more digits, a larger exponent);
+ * Otherwise the value is NaN: a decimal, but not decided here (w ≥ 2^53, a larger exponent);
  * the caller then asks `Number()`. A zero mantissa gives 0 or −0.
  * Source: W. D. Clinger, "How to read floating point numbers accurately", PLDI 1990, pp. 92–101
  * (the fast path of section 5). `mark` is the char code of the decimal mark (46 ".", 44 ",").
@@ -32,15 +32,11 @@ export function scanDecimal(text: string, start: number, end: number, mark: numb
     c = ++p < end ? text.charCodeAt(p) : 0;
   }
   let mantissa = 0;
-  let significant = 0;
   let fraction = 0;
   let digits = 0;
   while (c >= 48 && c <= 57) {
     digits++;
-    if (significant > 0 || c !== 48) {
-      mantissa = mantissa * 10 + (c - 48);
-      significant++;
-    }
+    mantissa = mantissa * 10 + (c - 48); // leading zeros leave it 0
     c = ++p < end ? text.charCodeAt(p) : 0;
   }
   if (c === mark) {
@@ -48,10 +44,7 @@ export function scanDecimal(text: string, start: number, end: number, mark: numb
     while (c >= 48 && c <= 57) {
       digits++;
       fraction++;
-      if (significant > 0 || c !== 48) {
-        mantissa = mantissa * 10 + (c - 48);
-        significant++;
-      }
+      mantissa = mantissa * 10 + (c - 48);
       c = ++p < end ? text.charCodeAt(p) : 0;
     }
   }
@@ -72,7 +65,9 @@ export function scanDecimal(text: string, start: number, end: number, mark: numb
     if (p === first) return -1;
     if (exponentNegative) exponent = -exponent;
   }
-  if (significant > maxDigits) return p;
+  // Each step w·10 + d is exact while the result stays below 2^53, and rounding cannot bring a larger
+  // result below it, so a final w < 2^53 was computed exactly.
+  if (!(mantissa < exactLimit)) return p;
   const power = exponent - fraction;
   let value: number;
   if (mantissa === 0) value = 0;

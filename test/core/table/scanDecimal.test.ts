@@ -1,8 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { scanDecimal, scannedValue } from "../../../src/core/table/scanDecimal.ts";
-import { decimalText } from "./decimalTexts.ts";
-import { bitsOf, exactDecimal } from "./exactDecimal.ts";
+import { boundaryText, decimalText } from "./decimalTexts.ts";
+import { bitsOf, exactDecimal, exactDecimalText } from "./exactDecimal.ts";
 
 let lastEnd = -1;
 /** The value scanDecimal wrote (NaN: not decided), keeping the index it returned in `lastEnd`. */
@@ -28,6 +28,22 @@ describe("scanDecimal: Clinger's fast path", () => {
     expect(decided).toBeGreaterThan(2_000); // the fast path must be exercised, not only declined
   });
 
+  it("on decimals of 14 to 17 significant digits with powers of ten from −25 to 25 (the fast path's edges), a value it returns has the bits of Number() and of exact rounding", () => {
+    let decided = 0;
+    fc.assert(
+      fc.property(boundaryText, (text) => {
+        const value = scan(text, 0, text.length, 46);
+        expect(lastEnd).toBe(text.length);
+        if (value !== value) return;
+        decided++;
+        expect(bitsOf(value)).toBe(bitsOf(Number(text))); // reference: Number()
+        expect(bitsOf(value)).toBe(bitsOf(exactDecimalText(text))); // reference: exact rational rounding (exactDecimal.ts)
+      }),
+      { numRuns: 20_000, seed: 53 },
+    );
+    expect(decided).toBeGreaterThan(5_000); // 14, 15 and most 16-digit mantissas within |p| ≤ 22
+  });
+
   it("exact BigInt rounding agrees with Number() bit for bit on the same random decimals (checks the reference itself)", () => {
     fc.assert(
       fc.property(decimalText, ({ text, negative, digits, power }) => {
@@ -37,9 +53,13 @@ describe("scanDecimal: Clinger's fast path", () => {
     );
   });
 
-  it("decides every decimal of at most 15 significant digits and |power of ten| ≤ 22, and declines 16 digits and power 23", () => {
+  it("decides digits below 2^53 with |power of ten| ≤ 22, and declines 2^53 and above, 17 digits and power 23", () => {
     expect(scan("999999999999999", 0, 15, 46)).toBe(999999999999999); // 15 digits, worked by hand
-    expect(scan("9007199254740993", 0, 16, 46)).toBeNaN(); // 16 digits (2^53 + 1): left to Number()
+    expect(scan("9007199254740991", 0, 16, 46)).toBe(9007199254740991); // 2^53 − 1 (16 digits) is exact, worked by hand
+    expect(scan("900719925474099.1", 0, 17, 46)).toBe(Number("900719925474099.1")); // the same digits over 10, reference: Number()
+    expect(scan("9007199254740992", 0, 16, 46)).toBeNaN(); // 2^53: w·10 + d may have rounded down to it, so left to Number()
+    expect(scan("9007199254740993", 0, 16, 46)).toBeNaN(); // 2^53 + 1: left to Number()
+    expect(scan("10000000000000000", 0, 17, 46)).toBeNaN(); // 17 digits: left to Number()
     expect(scan("1e22", 0, 4, 46)).toBe(1e22); // 10^22 is exact (5^22 < 2^53), Clinger 1990 section 5
     expect(scan("1e23", 0, 4, 46)).toBeNaN(); // 10^23 is not exact in binary64: left to Number()
     expect(scan("1e-22", 0, 5, 46)).toBe(1e-22); // one division by the exact 10^22
