@@ -1,6 +1,7 @@
 import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
 import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
 import { scanDecimal, scannedValue } from "./scanDecimal.ts";
+import { SpanLevels } from "./spanLevels.ts";
 import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
 
 /** Raw code of an empty cell: not a dictionary entry. */
@@ -33,6 +34,8 @@ export class ColumnBuilder {
   max = -Infinity;
   dictionary: Map<string, number> | null;
   rawLevels: string[] = [];
+  /** The dictionary's levels found by span (`pushSpan`), while there is a dictionary. */
+  private spanLevels: SpanLevels | null;
   levelValues: number[] = [];
   levelKinds: CellKind[] = [];
   rawCodes: GrowableUint32 | null;
@@ -53,6 +56,7 @@ export class ColumnBuilder {
   constructor(readonly decimal: DecimalMark, numbersOnly = false) {
     this.mark = decimal === "," ? 44 : 46;
     this.dictionary = numbersOnly ? null : new Map();
+    this.spanLevels = numbersOnly ? null : new SpanLevels(this.rawLevels);
     this.rawCodes = numbersOnly ? null : new GrowableUint32();
     if (numbersOnly) this.numberSet = new Set();
   }
@@ -70,6 +74,7 @@ export class ColumnBuilder {
         this.rawLevels.push(text);
         this.levelKinds.push(kind.kind);
         this.levelValues.push(kind.value);
+        this.spanLevels!.add(code);
       }
       this.rawCodes!.push(code);
       if (code === emptyCode) this.count(CellKind.blank, NaN, cell, row, line);
@@ -86,6 +91,23 @@ export class ColumnBuilder {
     }
     if (this.list && (row & 4095) === 4095 && this.looksNumeric()) this.leaveList();
     if (this.sparseRows) this.inPlace = this.firstNumbers.length === shownCells && this.firstValues.length === shownCells;
+  }
+
+  /**
+   * Adds the cell text[start, end) as `push` does; in "dictionary" form a text already seen is
+   * found from its span (`SpanLevels`) and counted as `push` counts a repeat, without cutting the
+   * cell out of the text. Borrows `text` for the call only.
+   */
+  pushSpan(text: string, start: number, end: number, line: number): void {
+    if (this.spanLevels !== null && end > start) {
+      const code = this.spanLevels.find(text, start, end);
+      if (code !== -1) {
+        this.rawCodes!.push(code);
+        this.count(this.levelKinds[code]!, this.levelValues[code]!, this.rawLevels[code]!, this.rows++, line);
+        return;
+      }
+    }
+    this.push(text.slice(start, end), line);
   }
 
   /**
@@ -175,6 +197,7 @@ export class ColumnBuilder {
       for (let r = 0; r < this.rows; ++r) this.list[r] = codes.get(r) === emptyCode ? "" : this.rawLevels[codes.get(r)]!;
     }
     this.dictionary = null;
+    this.spanLevels = null;
     this.rawCodes = null;
     this.rawLevels = [];
     this.levelKinds = [];

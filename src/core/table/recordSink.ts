@@ -35,7 +35,8 @@ export class RecordSink {
    * Takes the records of text[from, to), which holds no quote character: each line up to a "\n"
    * (and the rest, if `to` is not after one) is one record, its fields split at `delimiter`, exactly
    * the records `take` would get from the chunk parser, but without a string per numeric cell:
-   * each builder first tries to read its cell in place (`ColumnBuilder.takeNumberAt`).
+   * each builder first tries to read its cell in place (`ColumnBuilder.takeNumberAt`), and a
+   * dictionary finds a repeated text from its span (`ColumnBuilder.pushSpan`).
    * O(to − from); borrows `text` for the call only.
    */
   takePlain(text: string, from: number, to: number, delimiter: string): void {
@@ -61,7 +62,7 @@ export class RecordSink {
           if (end === -1) {
             end = p;
             while (end < stop && text.charCodeAt(end) !== separator) end++;
-            if (builder) builder.push(text.slice(p, end), line);
+            if (builder) builder.pushSpan(text, p, end, line);
           }
           if (end === stop) break;
           p = end + 1;
