@@ -44,6 +44,8 @@ export class ColumnBuilder {
   sparseTexts: string[] | null = null;
   /** Distinct numbers outside dictionary mode, up to the cap. */
   numberSet: Set<number> | null = null;
+  /** False once `numberSet` holds `distinctCap` numbers (so a full set is not asked its size per cell). */
+  private collecting = true;
   readonly firstValues: string[] = [];
   readonly firstNumbers: string[] = [];
   readonly firstTokens: KeptCell[] = [];
@@ -137,7 +139,7 @@ export class ColumnBuilder {
     if (!integer) this.nonIntegers++;
     if (value < this.min) this.min = value;
     if (value > this.max) this.max = value;
-    if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+    if (this.collecting) this.collect(value);
     return end;
   }
 
@@ -164,7 +166,7 @@ export class ColumnBuilder {
       if (value < this.min) this.min = value;
       if (value > this.max) this.max = value;
       if (this.firstNumbers.length < shownCells) this.firstNumbers.push(detach(cell));
-      if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+      if (this.collecting) this.collect(value);
     } else if (kind === CellKind.blank) {
       this.empty++;
       return;
@@ -177,6 +179,12 @@ export class ColumnBuilder {
       if (this.firstNotNumbers.length < shownCells) this.firstNotNumbers.push({ row, line, text: detach(cell) });
     }
     if (this.firstValues.length < shownCells) this.firstValues.push(detach(cell));
+  }
+
+  private collect(value: number): void {
+    if (!this.numberSet) return;
+    if (this.numberSet.size < distinctCap) this.numberSet.add(value);
+    else this.collecting = false;
   }
 
   // More distinct texts than the cap: keep a list of texts, or only the non-number cells.

@@ -16,9 +16,12 @@ const commaDecimal = /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/;
  * @example parseNumber("12,5", ",") // => 12.5
  */
 export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
-  if (scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46) === cell.length) {
+  const end = scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46);
+  if (end === cell.length) {
     const fast = scannedValue[0]!;
     if (fast === fast) return fast;
+  } else if (!mayHaveSpaceAtEnds(cell)) {
+    return NaN; // without white space around it, the patterns below accept exactly what scanDecimal reads
   }
   if (decimal === ",") {
     if (!commaDecimal.test(cell)) return NaN;
@@ -28,6 +31,13 @@ export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
   if (!pointDecimal.test(cell)) return NaN;
   const value = Number(cell);
   return Number.isFinite(value) ? value : NaN;
+}
+
+// False when the first and the last character are printable ASCII other than the space, which \s never matches.
+function mayHaveSpaceAtEnds(cell: string): boolean {
+  const first = cell.charCodeAt(0);
+  const last = cell.charCodeAt(cell.length - 1);
+  return !(first > 32 && first < 127 && last > 32 && last < 127);
 }
 
 // Lower-cased cells that mean "no value" in common exports and spreadsheets (common practice, no source).

@@ -123,3 +123,23 @@ describe("parseNumber: bit for bit what Number() gives (reference: Number(), cor
     expect(parseNumber(text)).toBeNaN();
   });
 });
+
+describe("parseNumber against the plain pattern (the reader's definition of a number, written out here)", () => {
+  // Reference: the anchored pattern with white space around, then Number(), finite only (the reader before the fast path).
+  const reference = (cell: string, decimal: "." | ","): number => {
+    const pattern = decimal === "," ? /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/ : /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
+    if (!pattern.test(cell)) return NaN;
+    const value = Number(decimal === "," ? cell.replace(",", ".") : cell);
+    return Number.isFinite(value) ? value : NaN;
+  };
+  const unit = fc.constantFrom(..."0123456789", "+", "-", ".", ",", "e", "E", "x", " ", "\t", "\u00a0", "\ufeff", "I", "n");
+
+  it("random strings of digits, signs, marks, exponents, letters and white space (ASCII and not) read with the reference's bits in both modes", () => {
+    fc.assert(
+      fc.property(fc.string({ unit, maxLength: 12 }), fc.constantFrom("." as const, "," as const), (cell, decimal) => {
+        expect(bitsOf(parseNumber(cell, decimal))).toBe(bitsOf(reference(cell, decimal)));
+      }),
+      { numRuns: 30_000, seed: 1234 },
+    );
+  });
+});
