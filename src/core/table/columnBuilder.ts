@@ -117,8 +117,8 @@ export class ColumnBuilder {
    * need not be kept as text, and returns the index where it ends; otherwise adds nothing and
    * returns −1 (the caller cuts the cell out and calls `push`). A cell need not be kept when the
    * column is in "sparse" form with its first cells kept for the report, and the cell is a plain
-   * decimal (`scanDecimal`; `Number()` on its text when it has more than 15 significant digits or
-   * a large exponent) that is finite and not an integer written otherwise than in its shortest form.
+   * decimal (`scanDecimal`; `Number()` on its text when its digits reach 2^53 or its power of ten
+   * passes ±22) that is finite and not an integer written otherwise than in its shortest form.
    * Such a cell is counted exactly as `push` would count it. Borrows `text` for the call only.
    */
   takeNumberAt(text: string, start: number, stop: number, separator: number): number {
