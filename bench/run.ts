@@ -116,3 +116,6 @@ await writeFile(new URL("./results/latest.json", import.meta.url), `${JSON.strin
 
 console.log("");
 await import("./sweep.ts"); // prints the sweep table, writes bench/results/sweep.json
+
+console.log("");
+await import("./readTable.ts"); // prints the reading speed (MB/s) of a mixed and a 17-digit file

@@ -1,5 +1,7 @@
 import { GrowableFloat64, GrowableUint32 } from "./growableArray.ts";
 import { cellKind, CellKind, detach, type KeptCell } from "./cellKind.ts";
+import { scanDecimal, scannedValue } from "./scanDecimal.ts";
+import { SpanLevels } from "./spanLevels.ts";
 import { distinctCap, numericShare, shownCells, type DecimalMark } from "./readOptions.ts";
 
 /** Raw code of an empty cell: not a dictionary entry. */
@@ -32,6 +34,8 @@ export class ColumnBuilder {
   max = -Infinity;
   dictionary: Map<string, number> | null;
   rawLevels: string[] = [];
+  /** The dictionary's levels found by span (`pushSpan`), while there is a dictionary. */
+  private spanLevels: SpanLevels | null;
   levelValues: number[] = [];
   levelKinds: CellKind[] = [];
   rawCodes: GrowableUint32 | null;
@@ -40,13 +44,21 @@ export class ColumnBuilder {
   sparseTexts: string[] | null = null;
   /** Distinct numbers outside dictionary mode, up to the cap. */
   numberSet: Set<number> | null = null;
+  /** False once `numberSet` holds `distinctCap` numbers (so a full set is not asked its size per cell). */
+  private collecting = true;
   readonly firstValues: string[] = [];
   readonly firstNumbers: string[] = [];
   readonly firstTokens: KeptCell[] = [];
   readonly firstNotNumbers: KeptCell[] = [];
+  /** Char code of the decimal mark, for `scanDecimal`. */
+  private readonly mark: number;
+  /** True once `takeNumberAt` may count cells without their text: "sparse" form, first cells kept. */
+  private inPlace = false;
 
   constructor(readonly decimal: DecimalMark, numbersOnly = false) {
+    this.mark = decimal === "," ? 44 : 46;
     this.dictionary = numbersOnly ? null : new Map();
+    this.spanLevels = numbersOnly ? null : new SpanLevels(this.rawLevels);
     this.rawCodes = numbersOnly ? null : new GrowableUint32();
     if (numbersOnly) this.numberSet = new Set();
   }
@@ -64,6 +76,7 @@ export class ColumnBuilder {
         this.rawLevels.push(text);
         this.levelKinds.push(kind.kind);
         this.levelValues.push(kind.value);
+        this.spanLevels!.add(code);
       }
       this.rawCodes!.push(code);
       if (code === emptyCode) this.count(CellKind.blank, NaN, cell, row, line);
@@ -79,6 +92,55 @@ export class ColumnBuilder {
       this.sparseTexts!.push(detach(cell));
     }
     if (this.list && (row & 4095) === 4095 && this.looksNumeric()) this.leaveList();
+    if (this.sparseRows) this.inPlace = this.firstNumbers.length === shownCells && this.firstValues.length === shownCells;
+  }
+
+  /**
+   * Adds the cell text[start, end) as `push` does; in "dictionary" form a text already seen is
+   * found from its span (`SpanLevels`) and counted as `push` counts a repeat, without cutting the
+   * cell out of the text. Borrows `text` for the call only.
+   */
+  pushSpan(text: string, start: number, end: number, line: number): void {
+    if (this.spanLevels !== null && end > start) {
+      const code = this.spanLevels.find(text, start, end);
+      if (code !== -1) {
+        this.rawCodes!.push(code);
+        this.count(this.levelKinds[code]!, this.levelValues[code]!, this.rawLevels[code]!, this.rows++, line);
+        return;
+      }
+    }
+    this.push(text.slice(start, end), line);
+  }
+
+  /**
+   * Adds the cell that starts at text[start] and ends at `stop` or at the first `separator`, if it
+   * need not be kept as text, and returns the index where it ends; otherwise adds nothing and
+   * returns −1 (the caller cuts the cell out and calls `push`). A cell need not be kept when the
+   * column is in "sparse" form with its first cells kept for the report, and the cell is a plain
+   * decimal (`scanDecimal`; `Number()` on its text when its digits reach 2^53 or its power of ten
+   * passes ±22) that is finite and not an integer written otherwise than in its shortest form.
+   * Such a cell is counted exactly as `push` would count it. Borrows `text` for the call only.
+   */
+  takeNumberAt(text: string, start: number, stop: number, separator: number): number {
+    if (!this.inPlace) return -1;
+    const end = scanDecimal(text, start, stop, this.mark === separator ? -1 : this.mark);
+    if (end === -1 || (end !== stop && text.charCodeAt(end) !== separator)) return -1;
+    let value = scannedValue[0]!;
+    if (value !== value) {
+      const cell = text.slice(start, end);
+      value = Number(this.mark === 44 ? cell.replace(",", ".") : cell);
+      if (!Number.isFinite(value)) return -1;
+    }
+    const integer = Number.isInteger(value);
+    if (integer && !isPlainInteger(text, start, end)) return -1;
+    this.rows++;
+    this.numbers.push(value);
+    this.numeric++;
+    if (!integer) this.nonIntegers++;
+    if (value < this.min) this.min = value;
+    if (value > this.max) this.max = value;
+    if (this.collecting) this.collect(value);
+    return end;
   }
 
   /** Adds a number read as a number (Parquet); NaN and ±Infinity count as missing tokens. */
@@ -104,7 +166,7 @@ export class ColumnBuilder {
       if (value < this.min) this.min = value;
       if (value > this.max) this.max = value;
       if (this.firstNumbers.length < shownCells) this.firstNumbers.push(detach(cell));
-      if (this.numberSet && this.numberSet.size < distinctCap) this.numberSet.add(value);
+      if (this.collecting) this.collect(value);
     } else if (kind === CellKind.blank) {
       this.empty++;
       return;
@@ -117,6 +179,12 @@ export class ColumnBuilder {
       if (this.firstNotNumbers.length < shownCells) this.firstNotNumbers.push({ row, line, text: detach(cell) });
     }
     if (this.firstValues.length < shownCells) this.firstValues.push(detach(cell));
+  }
+
+  private collect(value: number): void {
+    if (!this.numberSet) return;
+    if (this.numberSet.size < distinctCap) this.numberSet.add(value);
+    else this.collecting = false;
   }
 
   // More distinct texts than the cap: keep a list of texts, or only the non-number cells.
@@ -137,6 +205,7 @@ export class ColumnBuilder {
       for (let r = 0; r < this.rows; ++r) this.list[r] = codes.get(r) === emptyCode ? "" : this.rawLevels[codes.get(r)]!;
     }
     this.dictionary = null;
+    this.spanLevels = null;
     this.rawCodes = null;
     this.rawLevels = [];
     this.levelKinds = [];
@@ -161,17 +230,17 @@ export class ColumnBuilder {
 /** True for a cell whose text a sparse column keeps: a token, text, or an integer not written in its shortest form. */
 export function keepsText(kind: CellKind, value: number, cell: string): boolean {
   if (kind === CellKind.token || kind === CellKind.text) return true;
-  return kind === CellKind.number && Number.isInteger(value) && !isPlainInteger(cell) && cell !== String(value);
+  return kind === CellKind.number && Number.isInteger(value) && !isPlainInteger(cell, 0, cell.length) && cell !== String(value);
 }
 
-// Digits with an optional minus sign, no leading zero, at most 15 digits: exactly String(value) for such an integer.
-function isPlainInteger(cell: string): boolean {
-  const start = cell.charCodeAt(0) === 45 ? 1 : 0; // "-"
-  const digits = cell.length - start;
+// text[start, end) is digits with an optional minus sign, no leading zero, at most 15 digits: exactly String(value) for such an integer.
+function isPlainInteger(text: string, start: number, end: number): boolean {
+  const first = start < end && text.charCodeAt(start) === 45 ? start + 1 : start; // "-"
+  const digits = end - first;
   if (digits < 1 || digits > 15) return false;
-  if (cell.charCodeAt(start) === 48) return digits === 1 && start === 0; // "0" alone
-  for (let k = start; k < cell.length; ++k) {
-    const c = cell.charCodeAt(k);
+  if (text.charCodeAt(first) === 48) return digits === 1 && first === start; // "0" alone
+  for (let k = first; k < end; ++k) {
+    const c = text.charCodeAt(k);
     if (c < 48 || c > 57) return false;
   }
   return true;

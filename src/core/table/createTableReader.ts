@@ -22,13 +22,16 @@ export interface TableReader {
  * decimal mark (unless given) and to reject binary input; after that the records stream into
  * per-column builders (`ColumnBuilder`), so the text is never held whole.
  * Row k of the table is data record k (1-based numbering outside, 0-based inside).
+ * Lines without quotes are split by the sink itself (`RecordSink.takePlain`), with no string per
+ * numeric cell; `plainScan` false sends every record through papaparse instead (the reference
+ * path that test/core/table/plainScan.test.ts compares with; the outcome is the same).
  * Cost: O(text length); memory: 8 bytes per numeric cell plus the texts of text columns.
  * @example
  * const reader = createTableReader();
  * reader.push("x;y\n1,5;2\n");
  * reader.finish().table.columns[0]!.numbers // => Float64Array [1.5]
  */
-export function createTableReader(options: ReadOptions = {}): TableReader {
+export function createTableReader(options: ReadOptions = {}, plainScan = true): TableReader {
   const delimiterOption = options.delimiter === undefined ? undefined : maybeDelimiter(options.delimiter);
   const decimalOption = options.decimal === undefined ? undefined : maybeDecimalMark(options.decimal);
   const ragged = maybeRaggedPolicy(options.ragged ?? "reject");
@@ -52,7 +55,8 @@ export function createTableReader(options: ReadOptions = {}): TableReader {
     format = { kind: "delimited", delimiter, decimal, delimiterDetected: delimiterOption === undefined, decimalDetected: decimalOption === undefined };
     const records = new RecordSink(decimal);
     sink = records;
-    parser = chunkParser(delimiter, (r, m, b) => records.take(r, m, b), () => records.line);
+    const plain = plainScan ? (t: string, from: number, to: number): void => records.takePlain(t, from, to, delimiter) : undefined;
+    parser = chunkParser(delimiter, (r, m, b) => records.take(r, m, b), () => records.line, plain);
     parser.push(text);
   };
   const feed = (text: string): void => {

@@ -1,3 +1,4 @@
+import { scanDecimal, scannedValue } from "./scanDecimal.ts";
 import type { DecimalMark } from "./readOptions.ts";
 
 // Plain decimal with optional sign, fraction and exponent, surrounded by optional white space
@@ -10,9 +11,18 @@ const commaDecimal = /^\s*[+-]?(?:\d+,?\d*|,\d+)(?:[eE][+-]?\d+)?\s*$/;
  * Parses one cell as a finite decimal number, or returns NaN (a missing value).
  * With `decimal` "," the cell must use a comma as its decimal mark ("12,5"); no thousands
  * separators are read in either mode. Numbers beyond ±1.8e308 are NaN.
+ * Common cells take Clinger's fast path (`scanDecimal`); the rest go through `Number()`,
+ * so every value is exactly what `Number()` gives for the text (with "," read as ".").
  * @example parseNumber("12,5", ",") // => 12.5
  */
 export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
+  const end = scanDecimal(cell, 0, cell.length, decimal === "," ? 44 : 46);
+  if (end === cell.length) {
+    const fast = scannedValue[0]!;
+    if (fast === fast) return fast;
+  } else if (!mayHaveSpaceAtEnds(cell)) {
+    return NaN; // without white space around it, the patterns below accept exactly what scanDecimal reads
+  }
   if (decimal === ",") {
     if (!commaDecimal.test(cell)) return NaN;
     const value = Number(cell.replace(",", "."));
@@ -21,6 +31,13 @@ export function parseNumber(cell: string, decimal: DecimalMark = "."): number {
   if (!pointDecimal.test(cell)) return NaN;
   const value = Number(cell);
   return Number.isFinite(value) ? value : NaN;
+}
+
+// False when the first and the last character are printable ASCII other than the space, which \s never matches.
+function mayHaveSpaceAtEnds(cell: string): boolean {
+  const first = cell.charCodeAt(0);
+  const last = cell.charCodeAt(cell.length - 1);
+  return !(first > 32 && first < 127 && last > 32 && last < 127);
 }
 
 // Lower-cased cells that mean "no value" in common exports and spreadsheets (common practice, no source).

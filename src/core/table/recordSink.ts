@@ -31,6 +31,50 @@ export class RecordSink {
 
   constructor(private readonly decimal: DecimalMark) {}
 
+  /**
+   * Takes the records of text[from, to), which holds no quote character: each line up to a "\n"
+   * (and the rest, if `to` is not after one) is one record, its fields split at `delimiter`, exactly
+   * the records `take` would get from the chunk parser, but without a string per numeric cell:
+   * each builder first tries to read its cell in place (`ColumnBuilder.takeNumberAt`), and a
+   * dictionary finds a repeated text from its span (`ColumnBuilder.pushSpan`).
+   * O(to − from); borrows `text` for the call only.
+   */
+  takePlain(text: string, from: number, to: number, delimiter: string): void {
+    const separator = delimiter.charCodeAt(0);
+    let start = from;
+    while (start < to) {
+      let stop = text.indexOf("\n", start);
+      if (stop === -1 || stop > to) stop = to;
+      const line = this.line++;
+      if (start === stop && this.builders.length !== 1) {
+        this.emptyLines++;
+      } else if (this.header === null) {
+        this.header = text.slice(start, stop).split(delimiter);
+        this.builders = this.header.map(() => new ColumnBuilder(this.decimal));
+      } else {
+        const row = ++this.rows;
+        const builders = this.builders;
+        const width = builders.length;
+        let fields = 0;
+        for (let p = start; ; ++fields) {
+          const builder = fields < width ? builders[fields]! : null;
+          let end = builder ? builder.takeNumberAt(text, p, stop, separator) : -1;
+          if (end === -1) {
+            end = p;
+            while (end < stop && text.charCodeAt(end) !== separator) end++;
+            if (builder) builder.pushSpan(text, p, end, line);
+          }
+          if (end === stop) break;
+          p = end + 1;
+        }
+        fields++;
+        for (let j = fields; j < width; ++j) builders[j]!.push("", line);
+        if (fields !== width && this.raggedCount++ < shownCells) this.ragged.push({ row, line, fields });
+      }
+      start = stop + 1;
+    }
+  }
+
   /** Takes the complete records of one chunk (see ChunkParser). */
   take(records: readonly string[][], malformed: readonly number[], mayHoldLineBreaks: boolean): void {
     for (let k = 0; k < records.length; ++k) {

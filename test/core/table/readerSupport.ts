@@ -5,10 +5,13 @@ import type { ReadOutcome } from "../../../src/core/table/tableReport.ts";
 /** The outcome of a read, or the message of the one error it threw (any other throw fails the test). */
 export type Result = ReadOutcome | { readonly error: string };
 
-/** Reads `text` pushed in pieces cut at the given positions (sorted, deduplicated, clipped). */
-export function readInPieces(text: string, cuts: readonly number[] = [], options: ReadOptions = {}): Result {
+/**
+ * Reads `text` pushed in pieces cut at the given positions (sorted, deduplicated, clipped);
+ * `plainScan` false reads every record through papaparse (see createTableReader).
+ */
+export function readInPieces(text: string, cuts: readonly number[] = [], options: ReadOptions = {}, plainScan = true): Result {
   const at = [...new Set(cuts.map((c) => Math.max(0, Math.min(text.length, c))))].sort((a, b) => a - b);
-  const reader = createTableReader(options);
+  const reader = createTableReader(options, plainScan);
   try {
     let from = 0;
     for (const to of [...at, text.length]) {
