@@ -44,11 +44,17 @@ export function RecipeControls() {
           event.currentTarget.value = "";
         }}
       />
-      {outcome?.kind === "applied" && <span className="note" data-testid="recipe-status">Recipe applied</span>}
+      {outcome?.kind === "applied" && (
+        <span className="note recipe-message" data-testid="recipe-status">
+          Recipe applied
+          <button type="button" className="quiet" aria-label="close" onClick={() => setOpened(null)}>×</button>
+        </span>
+      )}
       {outcome?.kind === "refused" && (
-        <span role="alert" className="error">
+        <span role="alert" className="error recipe-message">
           Recipe not applied: {outcome.message}
           {!hasTable && <button type="button" onClick={() => tableInput.current?.click()}>Open the table…</button>}
+          <button type="button" className="quiet" aria-label="close" onClick={() => setOpened(null)}>×</button>
         </span>
       )}
       <input
@@ -65,7 +71,7 @@ export function RecipeControls() {
         }}
       />
       {outcome?.kind === "other-file" && opened && (
-        <span role="alert" className="error" data-testid="recipe-other-file">
+        <span role="alert" className="error recipe-message" data-testid="recipe-other-file">
           This recipe belongs to another file: {outcome.line}.
           <button type="button" onClick={() => void open(opened.text, true)}>Apply anyway</button>
           <button type="button" onClick={() => setOpened(null)}>Keep the current settings</button>
