@@ -141,3 +141,21 @@ describe("recipes whose reading options fail", () => {
     expect(recipeToJson(recipeFromState(store.getState())!)).toBe(recipeToJson(before));
   });
 });
+
+describe("recipes and the hotspot settings", () => {
+  it("a scan of the graph on screen adds its settings; applying them sets the pane's settings (the scan itself waits to be asked)", async () => {
+    const { store, base } = await loaded();
+    await base.setRole("out", "outcome");
+    await base.setRadius(1.5);
+    expect(recipeFromState(store.getState())).not.toHaveProperty("hotspots");
+    const result = store.getState().result!;
+    // a finished scan of this build (its figures do not matter to the recipe, only that it ran)
+    store.setState({ hotspotReplicates: 99, hotspotDirection: "both", hotspotScan: { result, state: "done", fraction: 1, scan: {} as never, error: null, elapsedMs: 1 } });
+    const recipe = recipeFromState(store.getState())!;
+    expect(recipe.hotspots).toEqual({ column: "out", direction: "both", maxNodes: 8, replicates: 99, score: "auto", scanSeed: 1, stabilitySeeds: 0 }); // 8, auto, 1, 0: the pane's defaults
+
+    const other = await loaded();
+    expect(await other.recipes.applyRecipe(recipe)).toEqual({ kind: "applied" });
+    expect(other.store.getState()).toMatchObject({ hotspotColumn: "out", hotspotDirection: "both", hotspotReplicates: 99, hotspotScan: { state: "idle" } });
+  });
+});
