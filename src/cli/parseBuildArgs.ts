@@ -2,7 +2,7 @@ import { parseNumber, type ByteReadOptions } from "../core/index.ts";
 import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
 import { numberList, type RowChoice } from "./regionArgs.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface BuildCommand extends CommonOptions {
   readonly input: string;
@@ -27,15 +27,14 @@ export const buildUsage = `usage: shoal build DATA --out DIR [options]
   --graphml           also write graph.graphml: the graph in GraphML, with nodes.csv's columns as
                       node attributes and edges.csv's shared counts on the edges
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 /** Parses `shoal build …` arguments; throws one clear message for anything wrong. */
 export function parseBuildArgs(args: readonly string[]): BuildCommand {
-  const { values, flags, positionals } = strictArgs(
-    args,
-    { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" } },
-    ["graphml"],
-  );
+  const { values, flags, positionals, recipe } = argsWithRecipe(args, {
+    ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" }, graphml: { type: "boolean" },
+  });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out DIR");
   let radius: number | null = null;
@@ -48,5 +47,5 @@ export function parseBuildArgs(args: readonly string[]): BuildCommand {
   if (!choice && values["region-name"] !== undefined) throw new Error("--region-name needs --region-nodes");
   if (values["region-name"] === "") throw new Error("invalid --region-name: an empty name");
   const region = choice ? { name: values["region-name"] ?? "region", choice } : null;
-  return { ...readCommonOptions(values), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region, graphml: flags.has("graphml") };
+  return { ...readCommonOptions(values, recipe), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region, graphml: flags.has("graphml") };
 }

@@ -2,7 +2,7 @@ import { parseNumber, type ByteReadOptions } from "../core/index.ts";
 import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
 import { numberList, type RowChoice } from "./regionArgs.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface DrawCommand extends CommonOptions {
   readonly input: string;
@@ -38,15 +38,14 @@ export const drawUsage = `usage: shoal draw DATA --colour-by COLUMN --out FILE.s
   --region-nodes 3,4  outline a region: the rows of these nodes (1-based), as the workbench outlines one
   --region-name NAME  the region's name in the legend (default region)
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 /** Parses `shoal draw …` arguments; throws one clear message for anything wrong. */
 export function parseDrawArgs(args: readonly string[]): DrawCommand {
-  const flags = args.filter((a) => a === "--greyscale").length;
-  if (flags > 1) throw new Error("--greyscale given twice");
-  const { values, positionals } = strictArgs(args.filter((a) => a !== "--greyscale"), {
+  const { values, flags, positionals, recipe } = argsWithRecipe(args, {
     ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "colour-by": { type: "string" }, size: { type: "string" },
-    density: { type: "string" }, "layout-seed": { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" },
+    density: { type: "string" }, "layout-seed": { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" }, greyscale: { type: "boolean" },
   });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out FILE.svg or FILE.png");
@@ -70,9 +69,9 @@ export function parseDrawArgs(args: readonly string[]): DrawCommand {
   if (!choice && values["region-name"] !== undefined) throw new Error("--region-name needs --region-nodes");
   if (values["region-name"] === "") throw new Error("invalid --region-name: an empty name");
   return {
-    ...readCommonOptions(values),
+    ...readCommonOptions(values, recipe),
     input: positionals[0]!, out: values.out, format: extension, radius, read: readByteOptions(values), colourBy: values["colour-by"],
-    width: Number(size[1]), height: Number(size[2]), density, layoutSeed, greyscale: flags === 1,
+    width: Number(size[1]), height: Number(size[2]), density, layoutSeed, greyscale: flags.has("greyscale"),
     region: choice ? { name: values["region-name"] ?? "region", choice } : null,
   };
 }

@@ -1,34 +1,39 @@
 import { parseArgs } from "node:util";
 
-type StringOptions = Record<string, { type: "string"; default?: string }>;
-type AnyOptions = Record<string, { type: "string"; default?: string } | { type: "boolean" }>;
+/**
+ * Options take a value ("string") or none ("boolean", a switch). There are no defaults here: an
+ * option not typed stays undefined, so a recipe's value can fill it before the defaults do.
+ */
+export type OptionSpec = Record<string, { readonly type: "string" } | { readonly type: "boolean" }>;
+
+export interface ParsedArgs {
+  /** Values of the options that take one, as typed; undefined when not typed. */
+  readonly values: Record<string, string | undefined>;
+  /** The switches typed. */
+  readonly flags: ReadonlySet<string>;
+  readonly positionals: string[];
+}
 
 /**
  * node:util parseArgs in strict mode, with fixes for a command line: a value that starts with "-"
  * followed by a digit ("--radius -1") is taken as the option's value, not as an option; an option
  * given twice is an error naming it; and parser errors become one lowercase line
- * ("unknown option: --x", "missing value for --out"). `flags` names options that take no value
- * (`--graphml`); those given are returned in `flags`.
+ * ("unknown option: --x", "missing value for --out").
  */
-export function strictArgs(
-  args: readonly string[],
-  options: StringOptions,
-  flagNames: readonly string[] = [],
-): { values: Record<string, string | undefined>; flags: ReadonlySet<string>; positionals: string[] } {
-  const spec: AnyOptions = { ...options };
-  for (const name of flagNames) spec[name] = { type: "boolean" };
+export function strictArgs(args: readonly string[], options: OptionSpec): ParsedArgs {
   const joined: string[] = [];
   for (let k = 0; k < args.length; ++k) {
     const token = args[k]!;
     const next = args[k + 1];
-    if (token.startsWith("--") && !token.includes("=") && next !== undefined && /^-[\d.]/.test(next)) {
+    const isSwitch = options[token.slice(2)]?.type === "boolean";
+    if (token.startsWith("--") && !isSwitch && !token.includes("=") && next !== undefined && /^-[\d.]/.test(next)) {
       joined.push(`${token}=${next}`);
       k++;
     } else joined.push(token);
   }
-  let parsed: ReturnType<typeof parseArgs<{ args: string[]; allowPositionals: true; strict: true; options: AnyOptions; tokens: true }>>;
+  let parsed: ReturnType<typeof parseArgs<{ args: string[]; allowPositionals: true; strict: true; options: OptionSpec; tokens: true }>>;
   try {
-    parsed = parseArgs({ args: joined, allowPositionals: true, strict: true, options: spec, tokens: true });
+    parsed = parseArgs({ args: joined, allowPositionals: true, strict: true, options, tokens: true });
   } catch (error) {
     const message = error instanceof Error ? error.message.split("\n")[0]! : String(error);
     const unknown = /Unknown option '([^']+)'/.exec(message);
@@ -45,8 +50,8 @@ export function strictArgs(
   const values: Record<string, string | undefined> = {};
   const flags = new Set<string>();
   for (const [name, value] of Object.entries(parsed.values)) {
-    if (typeof value === "boolean") flags.add(name);
-    else if (typeof value === "string") values[name] = value;
+    if (typeof value === "string") values[name] = value;
+    else if (value === true) flags.add(name);
   }
   return { values, flags, positionals: parsed.positionals };
 }

@@ -160,7 +160,7 @@ describe("actions: exportCover", () => {
     // node 1's first member, written as 1-based row and the name of that record
     const firstRow = result.members.items[0]!;
     expect(members[1]).toBe(`1,${firstRow + 1},${["ann", "bob", "cyd", "dee", "eve", "fay"][firstRow]}`);
-    expect(Object.keys(files).sort()).toEqual(["edges.csv", "graph.graphml", "members.csv", "nodes.csv", "summary.json"]);
+    expect(Object.keys(files).sort()).toEqual(["edges.csv", "graph.graphml", "members.csv", "nodes.csv", "recipe.json", "summary.json"]); // recipe.json: how the tables were made
   });
 });
 

@@ -4,6 +4,7 @@ import { formatCount } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { ExportButton } from "./ExportButton.tsx";
 import { SavePicture } from "./SavePicture.tsx";
+import { RecipeControls } from "./RecipeControls.tsx";
 
 /** Top bar: where the table comes from, the ways to bring one in, reading progress, and the export. */
 export function SourceBar() {
@@ -64,6 +65,7 @@ export function SourceBar() {
         />
         <ExportButton />
         <SavePicture />
+        <RecipeControls />
       </div>
     </header>
   );
