@@ -1,6 +1,7 @@
 import { forceCollide, forceLink, forceManyBody, forceSimulation, forceX, forceY, type Simulation, type SimulationNodeDatum } from "d3-force";
 import { useEffect, useRef } from "react";
 import type { CoverResult } from "../../core/index.ts";
+import { keepLayoutPositions, seedLayoutPositions } from "../../state/session/layoutPositions.ts";
 import { maxDrawnEdges } from "./drawLimits.ts";
 import { nodeRadius } from "./scales.ts";
 
@@ -52,6 +53,7 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
     // set up in a task of its own: the answer's task already carries React's render of the result
     const start = setTimeout(() => {
       const current = layoutOf(result);
+      seedLayoutPositions(result, current.nodes); // a restored session's positions, for this very build
       layout.current = current;
       simulation = forceSimulation<LayoutNode>(current.nodes as LayoutNode[])
         .force("link", forceLink<LayoutNode, Layout["links"][number]>(current.links as Layout["links"][number][]).distance((l) => l.source.radius + l.target.radius + 14).strength(0.7))
@@ -59,7 +61,8 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
         .force("collide", forceCollide<LayoutNode>((n) => n.radius + 2))
         .force("x", forceX<LayoutNode>(0).strength(0.05))
         .force("y", forceY<LayoutNode>(0).strength(0.05))
-        .on("tick", () => tick.current(current));
+        .on("tick", () => tick.current(current))
+        .on("end", () => keepLayoutPositions(result, current.nodes));
       simulationRef.current = simulation;
       if (pausedRef.current) simulation.stop();
     }, 0);
