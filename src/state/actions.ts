@@ -7,6 +7,7 @@ import { createHotspotActions, type HotspotActions } from "./hotspotActions.ts";
 import { createRegionActions } from "./regionActions.ts";
 import { firstFreeRegionName, renameRefusal } from "./regionNames.ts";
 import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
+import { createRecipeActions, type RecipeActions } from "./recipeActions.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
@@ -76,7 +77,7 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
     const roles = defaultRoles(table, hints);
     const colour = colorBy ?? table.columns.find((c) => roles[c.name] === "outcome" && c.kind === "numeric")?.name ?? null;
     set({
-      source, table, report: answer.report, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, selection: [],
+      source, table, report: answer.report, inputFingerprint: answer.fingerprint, roles, weights: {}, colorBy: colour, loadStatus: "ready", result: null, selectedNode: null, selection: [],
       regions: [], activeRegionId: null, rowQuery: null, // regions name rows of the table they were kept on
       radius: NaN, suggestedRadius: NaN, sweep: null, region: null, seedRuns: null,
       stage: answer.report.notices.length > 0 && !source.isDemo ? "report" : "graph",
@@ -350,10 +351,10 @@ function mark(name: string): void {
   globalThis.performance?.mark?.(name);
 }
 
-let appActions: (Actions & RegionPaneActions & HotspotActions) | null = null;
+let appActions: (Actions & RegionPaneActions & HotspotActions & RecipeActions) | null = null;
 
 /** Actions bound to the application's store and a worker, created on first use (the region pane's and the hotspot pane's composed in). */
-export function actions(): Actions & RegionPaneActions & HotspotActions {
+export function actions(): Actions & RegionPaneActions & HotspotActions & RecipeActions {
   if (appActions) return appActions;
   const env: ActionEnvironment = {
     client: createWorkerClient(),
@@ -366,6 +367,7 @@ export function actions(): Actions & RegionPaneActions & HotspotActions {
   };
   const base = createActions(workbenchStore, env);
   const hotspots = createHotspotActions(workbenchStore, { ...env, takeRegionId: () => nextRegionId++ });
-  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots };
+  const recipes = createRecipeActions(workbenchStore, { takeRegionId: () => nextRegionId++, reload: base.reload, setRadius: base.setRadius });
+  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots, ...recipes };
   return appActions;
 }

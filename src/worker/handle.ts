@@ -1,6 +1,7 @@
 import {
   buildCover,
   Cancelled,
+  createFingerprint,
   countCandidateSets,
   coverExports,
   figureBuffers,
@@ -13,6 +14,7 @@ import {
   seedStability,
   defaultRadius,
   type ByteSource,
+  type FileFingerprint,
   type ParsedTable,
   type ReadOutcome,
   zipExports,
@@ -50,12 +52,16 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
     nodeStatistics = null;
     return (table = next);
   };
-  const adoptOutcome = (request: Extract<Request, { type: "load" }>, outcome: ReadOutcome): Answer => {
-    return { id: request.id, type: "loaded", table: keep(share(outcome.table)), report: outcome.report };
+  const adoptOutcome = (request: Extract<Request, { type: "load" }>, outcome: ReadOutcome, fingerprint: FileFingerprint): Answer => {
+    return { id: request.id, type: "loaded", table: keep(share(outcome.table)), report: outcome.report, fingerprint };
   };
   // text in memory is read at once (so the answer is synchronous); a file is streamed
   const load = (request: Extract<Request, { type: "load" }>, progress: (phase: Progress["phase"], fraction: number) => void): Answer | Promise<Answer> => {
-    if (request.source.kind === "text") return adoptOutcome(request, readTableText(request.source.text, request.options));
+    const hash = createFingerprint(); // of the text's UTF-8 bytes (the demo is fetched as text), or of the file's bytes as read
+    if (request.source.kind === "text") {
+      hash.update(new TextEncoder().encode(request.source.text));
+      return adoptOutcome(request, readTableText(request.source.text, request.options), hash.finish());
+    }
     return readTableBytes(blobSource(request.source.file), request.options, {
       utf8: () => {
         const decoder = new TextDecoder("utf-8", { fatal: true });
@@ -63,8 +69,9 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
       },
       onProgress: (fraction) => progress("parse", fraction),
       shouldStop: () => isStopped(request),
+      onBytes: (bytes) => hash.update(bytes),
     })
-      .then((outcome) => adoptOutcome(request, outcome))
+      .then((outcome) => adoptOutcome(request, outcome, hash.finish()))
       .catch((error: unknown) => failure(request.id, error)); // also catches a throw in adoptOutcome (share)
   };
   return (request, report) => {

@@ -5,6 +5,7 @@ import type {
   ColumnSummary,
   CoverResult,
   ExportContext,
+  FileFingerprint,
   HotspotOptions,
   HotspotScan,
   ParsedTable,
@@ -110,7 +111,7 @@ export interface RegionCurve {
 
 /** Final answers. `load` returns the parsed table so the main thread can colour, summarise and export. */
 export type Answer =
-  | { readonly id: number; readonly type: "loaded"; readonly table: ParsedTable; readonly report: TableReport }
+  | { readonly id: number; readonly type: "loaded"; readonly table: ParsedTable; readonly report: TableReport; readonly fingerprint: FileFingerprint }
   | { readonly id: number; readonly type: "adopted" }
   | { readonly id: number; readonly type: "radius"; readonly radius: number }
   | { readonly id: number; readonly type: "built"; readonly result: CoverResult }

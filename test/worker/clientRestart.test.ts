@@ -51,7 +51,7 @@ describe("worker client with a Worker and no shared memory: cancelling restarts 
     const [first, second] = FakeWorker.made;
     expect(first!.terminated).toBe(true);
     expect(second!.sent.map((m) => `${m.type}${"id" in m ? m.id : ""}`)).toEqual(["load1", "build3"]);
-    second!.answer({ id: 1, type: "loaded", table, report: {} as never });
+    second!.answer({ id: 1, type: "loaded", table, report: {} as never, fingerprint: { bytes: 0, sha256: "" } });
     await load;
     expect(answers[1]).toMatchObject({ id: 1, type: "loaded" });
     second!.answer({ id: 3, type: "built", result: {} as never });
@@ -61,7 +61,7 @@ describe("worker client with a Worker and no shared memory: cancelling restarts 
   it("cancelling the load lane answers the load 'cancelled' and sends a waiting build again, after handing over the last table", async () => {
     const client = createWorkerClient();
     const firstLoad = client.send({ type: "load", source: { kind: "file", file }, options: {} });
-    FakeWorker.made[0]!.answer({ id: 1, type: "loaded", table, report: {} as never });
+    FakeWorker.made[0]!.answer({ id: 1, type: "loaded", table, report: {} as never, fingerprint: { bytes: 0, sha256: "" } });
     await firstLoad;
     const secondLoad = client.send({ type: "load", source: { kind: "file", file }, options: {} });
     const build = client.send({ type: "build", params });
@@ -82,7 +82,7 @@ describe("worker client with a Worker and no shared memory: cancelling restarts 
     const [ended, restarted] = FakeWorker.made;
     ended!.answer({ id: 1, type: "failed", message: "from the ended worker" });
     await settle();
-    restarted!.answer({ id: 1, type: "loaded", table, report: {} as never });
+    restarted!.answer({ id: 1, type: "loaded", table, report: {} as never, fingerprint: { bytes: 0, sha256: "" } });
     expect(await load).toMatchObject({ id: 1, type: "loaded" });
   });
 });

@@ -29,6 +29,8 @@ export interface ByteReadControl {
   readonly onProgress?: (fraction: number, rows: number) => void;
   readonly shouldStop?: () => boolean;
   readonly chunkBytes?: number;
+  /** Sees every byte of the file once, in order, as it is read (a fingerprint's hash is fed here). */
+  readonly onBytes?: (bytes: Uint8Array) => void;
 }
 
 export const readChunkBytes = 1 << 22; // 4 MiB per step: progress and cancellation every few tens of milliseconds
@@ -50,6 +52,7 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
   const head = await source.read(0, Math.min(size, encodingProbeBytes));
   if (size >= 12 && isParquet(head.subarray(0, 4)) && isParquet(await source.read(size - 4, size))) {
     const bytes = await source.read(0, size);
+    control.onBytes?.(bytes);
     return readParquet(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer, { onProgress: (f) => control.onProgress?.(f, 0) });
   }
   const detected = detectEncoding(head, size <= encodingProbeBytes);
@@ -58,6 +61,7 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
   const { encoding: _chosen, ...readOptions } = options;
   const reader = createTableReader(readOptions);
   const step = control.chunkBytes ?? readChunkBytes;
+  control.onBytes?.(head.subarray(0, detected.bomLength));
   for (let start = detected.bomLength; start < size; start += step) {
     stop();
     const end = Math.min(size, start + step);
@@ -67,6 +71,7 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
     } catch (error) {
       throw new Error(`cannot read the file at bytes ${start} to ${end}: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
     }
+    control.onBytes?.(bytes);
     let text: string;
     try {
       text = decode(bytes, end === size);

@@ -1,4 +1,4 @@
-import type { ByteReadOptions, ParsedTable, TableReport } from "../../core/index.ts";
+import type { ByteReadOptions, FileFingerprint, ParsedTable, TableReport } from "../../core/index.ts";
 
 export interface DataSource {
   readonly fileName: string;
@@ -20,6 +20,8 @@ export interface DataSlice {
   readonly loadError: string | null;
   /** A note about the last load that is not a failure (it was cancelled), or null. */
   readonly loadNotice: string | null;
+  /** Size and SHA-256 of the bytes the table was read from (the worker hashes them as it reads); null before a load. */
+  readonly inputFingerprint: FileFingerprint | null;
 }
 
-export const initialData: DataSlice = { source: null, table: null, report: null, readOptions: {}, loadStatus: "idle", loadProgress: 0, loadError: null, loadNotice: null };
+export const initialData: DataSlice = { source: null, table: null, report: null, readOptions: {}, loadStatus: "idle", loadProgress: 0, loadError: null, loadNotice: null, inputFingerprint: null };
