@@ -13,6 +13,8 @@ export interface KeepingEnvironment {
   readonly loadFile: (file: Blob & { readonly name: string }) => Promise<void>;
   readonly loadedSource: () => TableSource | null;
   readonly storage?: SessionStorage;
+  /** Wait after a change before the session is written (default 500 ms). */
+  readonly saveDelayMs?: number;
 }
 
 /**
@@ -31,7 +33,7 @@ export function createKeepingActions(store: WorkbenchStore, env: KeepingEnvironm
     },
   };
   const history = createHistoryActions(store, recipes);
-  const session = createSessionActions(store, { storage: env.storage ?? idbSessionStorage(), recipes, loadDemo: env.loadDemo, loadFile: env.loadFile, loadedSource: env.loadedSource });
+  const session = createSessionActions(store, { storage: env.storage ?? idbSessionStorage(), recipes, loadDemo: env.loadDemo, loadFile: env.loadFile, loadedSource: env.loadedSource, ...(env.saveDelayMs === undefined ? {} : { saveDelayMs: env.saveDelayMs }) });
   if (typeof document !== "undefined") {
     const flush = (): void => void session.flushSession();
     window.addEventListener("pagehide", flush);
