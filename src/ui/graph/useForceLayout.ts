@@ -53,7 +53,7 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
     // set up in a task of its own: the answer's task already carries React's render of the result
     const start = setTimeout(() => {
       const current = layoutOf(result);
-      seedLayoutPositions(result, current.nodes); // a restored session's positions, for this very build
+      const seeded = seedLayoutPositions(result, current.nodes); // a restored session's positions, for this very build
       layout.current = current;
       simulation = forceSimulation<LayoutNode>(current.nodes as LayoutNode[])
         .force("link", forceLink<LayoutNode, Layout["links"][number]>(current.links as Layout["links"][number][]).distance((l) => l.source.radius + l.target.radius + 14).strength(0.7))
@@ -64,6 +64,7 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
         .on("tick", () => tick.current(current))
         .on("end", () => keepLayoutPositions(result, current.nodes));
       simulationRef.current = simulation;
+      if (seeded) simulation.alpha(simulation.alphaMin()); // already at rest: one step, no new layout
       if (pausedRef.current) simulation.stop();
     }, 0);
     return () => {
