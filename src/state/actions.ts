@@ -369,7 +369,7 @@ export function actions(): Actions & RegionPaneActions & HotspotActions & Recipe
   const base = createActions(workbenchStore, env);
   const hotspots = createHotspotActions(workbenchStore, { ...env, takeRegionId: () => nextRegionId++ });
   const recipes = createRecipeActions(workbenchStore, { takeRegionId: () => nextRegionId++, reload: base.reload, setRadius: base.setRadius });
-  const keeping = createKeepingActions(workbenchStore, { ...base, applyRecipe: recipes.applyRecipe }); // undo/redo and the kept session
+  const keeping = createKeepingActions(workbenchStore, { ...base, applyRecipe: recipes.applyRecipe, takeRegionId: () => nextRegionId++ }); // undo/redo and the kept session
   appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots, ...recipes, ...keeping };
   return appActions;
 }

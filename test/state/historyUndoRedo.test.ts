@@ -17,7 +17,7 @@ async function workbench() {
   const base = createActions(store, { client: inThreadClient(), fetchDemo: noDemo, now: steppingClock() });
   let regionId = 1000;
   const recipes = createRecipeActions(store, { takeRegionId: () => regionId++, reload: base.reload, setRadius: base.setRadius });
-  const keeping = createKeepingActions(store, { ...base, applyRecipe: recipes.applyRecipe, storage: memoryStorage() });
+  const keeping = createKeepingActions(store, { ...base, applyRecipe: recipes.applyRecipe, takeRegionId: () => regionId++, storage: memoryStorage() });
   await base.loadText(csv, { fileName: "grid.csv", fileSize: csv.length, isDemo: false });
   await settle();
   return { store, actions: { ...base, ...recipes, ...keeping } };
@@ -110,6 +110,29 @@ describe("undo and redo over the store", () => {
     await actions.undo();
     expect(store.getState().result).toBe(result);
     expect(store.getState().selection).toEqual([]);
+  });
+
+  it("a region rename and a colour change are undone without a rebuild: the result object stays, the open node too", async () => {
+    const { store, actions } = await workbench();
+    await actions.setRadius(1.2);
+    actions.selectNodes([0]);
+    const region = actions.keepSelectionAsRegion()!;
+    await settle();
+    const result = store.getState().result;
+    await actions.selectNode(1);
+    actions.renameRegion(region.id, "corner");
+    await settle();
+    actions.setColorBy("x");
+    await settle();
+    await actions.undo();
+    expect(store.getState()).toMatchObject({ colorBy: null, selectedNode: 1 });
+    await actions.undo();
+    expect(store.getState().regions.map((r) => r.name)).toEqual(["Region A"]);
+    expect(store.getState().regions.find((r) => r.id === store.getState().activeRegionId)?.name).toBe("Region A");
+    expect(store.getState().result).toBe(result);
+    await actions.redo();
+    expect(store.getState().regions.map((r) => r.name)).toEqual(["corner"]);
+    expect(store.getState().result).toBe(result);
   });
 
   it("a metric change is one step: its default radius's build is what undo comes back to, not the state between", async () => {

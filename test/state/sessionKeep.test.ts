@@ -23,7 +23,7 @@ function page(storage: SessionStorage) {
   const base = createActions(store, { client: inThreadClient(), fetchDemo: () => Promise.resolve(demoCsv), now: steppingClock() });
   let regionId = 1000;
   const recipes = createRecipeActions(store, { takeRegionId: () => regionId++, reload: base.reload, setRadius: base.setRadius });
-  const keeping = createKeepingActions(store, { ...base, applyRecipe: recipes.applyRecipe, storage, saveDelayMs: 5 });
+  const keeping = createKeepingActions(store, { ...base, applyRecipe: recipes.applyRecipe, takeRegionId: () => regionId++, storage, saveDelayMs: 5 });
   return { store, actions: { ...base, ...recipes, ...keeping } };
 }
 

@@ -76,7 +76,10 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
 
   /** A table the user brought in (not the restore's): a pending restore is given up, and the last table's kept bytes go. */
   function onNewTable(state: WorkbenchState, previous: WorkbenchState): void {
-    if (state.sessionRestore.state === "needs-file" || state.sessionRestore.state === "other-file") restore({ state: "none" });
+    if (state.sessionRestore.state === "needs-file" || state.sessionRestore.state === "other-file") {
+      restoring = null;
+      restore({ state: "none" });
+    }
     if (previous.source !== null && (state.keepTable || state.kept.tableBytes !== null)) void setKeepTable(false);
   }
 
