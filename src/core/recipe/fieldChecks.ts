@@ -5,10 +5,11 @@ export type Json = Record<string, unknown>;
 
 export const isObject = (value: unknown): value is Json => typeof value === "object" && value !== null && !Array.isArray(value);
 
-const shown = (value: unknown): string => (value === undefined ? "nothing" : JSON.stringify(value) ?? String(value));
+const shown = (value: unknown): string => JSON.stringify(value) ?? String(value);
 
+/** Records a bad value; an absent one was already reported as a missing field by `objectField`. */
 export function bad(problems: Problems, path: string, expected: string, value: unknown): undefined {
-  problems.push(`${path}: expected ${expected}, got ${shown(value)}`);
+  if (value !== undefined) problems.push(`${path}: expected ${expected}, got ${shown(value)}`);
   return undefined;
 }
 

@@ -65,14 +65,15 @@ function checkReading(problems: Problems, value: unknown): void {
   oneOf(problems, "reading.ragged", reading.ragged, ["reject", "pad"]);
 }
 
-function checkColumns(problems: Problems, value: unknown): { outcomes: readonly string[] } | undefined {
+function checkColumns(problems: Problems, value: unknown): { outcomes: readonly string[] | undefined } | undefined {
   const columns = objectField(problems, "columns", value, ["features", "id", "outcomes", "oneHot", "weights"]);
   if (!columns) return undefined;
-  const features = names(problems, "columns.features", columns.features) ?? [];
+  // a list that is itself bad is left out of the checks across lists, so it gives one message only
+  const features = names(problems, "columns.features", columns.features);
   const id = textOrNull(problems, "columns.id", columns.id);
-  const outcomes = names(problems, "columns.outcomes", columns.outcomes) ?? [];
-  const oneHot = names(problems, "columns.oneHot", columns.oneHot) ?? [];
-  const roles: [string, readonly string[]][] = [["features", features], ["oneHot", oneHot], ["outcomes", outcomes], ["id", typeof id === "string" ? [id] : []]];
+  const outcomes = names(problems, "columns.outcomes", columns.outcomes);
+  const oneHot = names(problems, "columns.oneHot", columns.oneHot);
+  const roles: [string, readonly string[]][] = [["features", features ?? []], ["oneHot", oneHot ?? []], ["outcomes", outcomes ?? []], ["id", typeof id === "string" ? [id] : []]];
   for (let a = 0; a < roles.length; ++a) {
     for (let b = a + 1; b < roles.length; ++b) {
       for (const name of roles[a]![1]) if (roles[b]![1].includes(name)) problems.push(`columns: ${name} is in both ${roles[a]![0]} and ${roles[b]![0]}`);
@@ -81,7 +82,7 @@ function checkColumns(problems: Problems, value: unknown): { outcomes: readonly 
   if (isObject(columns.weights)) {
     for (const [name, weight] of Object.entries(columns.weights as Json)) {
       if (!(typeof weight === "number" && weight >= 0 && Number.isFinite(weight))) bad(problems, `columns.weights.${name}`, "a number of at least 0", weight);
-      else if (!features.includes(name) && !oneHot.includes(name)) problems.push(`columns.weights: ${name} is not a feature`);
+      else if (features && oneHot && !features.includes(name) && !oneHot.includes(name)) problems.push(`columns.weights: ${name} is not a feature`);
     }
   } else if ("weights" in columns) bad(problems, "columns.weights", "an object of column name to weight", columns.weights);
   return { outcomes };
