@@ -1,5 +1,5 @@
 import "fake-indexeddb/auto";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { nodeMembers, type CoverResult } from "../../src/core/index.ts";
 import { createActions } from "../../src/state/actions.ts";
 import { createRecipeActions } from "../../src/state/recipeActions.ts";
@@ -14,6 +14,11 @@ const otherCsv = csv.replace("\n0,0,0\n", "\n0,0,1\n");
 const demoCsv = "pump_id,temp,vib,failed_within_90d,downtime_h\n1,0,0,0,1\n2,1,0,1,2\n3,0,1,0,3\n4,5,5,1,4\n5,6,5,0,5\n6,5,6,1,6\n"; // the demo's column names (state/demo.ts)
 
 const settle = (ms = 0): Promise<void> => new Promise((resolve) => setTimeout(resolve, ms));
+/** Lets the 5 ms save delay pass, then waits for every write asked for so far. */
+const written = async (actions: { flushSession: () => Promise<void> }): Promise<void> => {
+  await settle(10);
+  await actions.flushSession();
+};
 let databases = 0;
 const freshStorage = (): SessionStorage => idbSessionStorage({ name: `shoal-keep-test-${++databases}`, store: "kept" });
 
@@ -47,7 +52,8 @@ async function work(storage: SessionStorage, content = csv) {
   first.actions.selectNodes([0]);
   first.actions.keepSelectionAsRegion();
   first.actions.selectNodes([1, 2]);
-  await settle(30);
+  await settle(10);
+  await first.actions.flushSession(); // the write under way (or the pending one) is done
   return first;
 }
 
@@ -75,12 +81,26 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     expect(reload.store.getState().sessionRestore).toEqual({ state: "none" });
   });
 
+  it("a restored session starts its own history: no undo step at first, and undo after a change comes back to the restored state", async () => {
+    const storage = freshStorage();
+    const before = view((await work(storage)).store);
+    const reload = page(storage);
+    await reload.actions.startSession();
+    await reload.actions.restoreFromFile(new File([csv], "grid.csv"));
+    await settle();
+    expect(reload.store.getState()).toMatchObject({ undoDepth: 0, redoDepth: 0 });
+    await reload.actions.setRadius(2.5);
+    await settle();
+    await reload.actions.undo();
+    expect(view(reload.store)).toEqual(before);
+  });
+
   it("the layout positions kept go back to the store on restore", async () => {
     const storage = freshStorage();
     const first = await work(storage);
     const landmarks = Array.from(first.store.getState().result!.landmarks);
     first.store.setState({ layoutPositions: { landmarks, x: landmarks.map((_, k) => k), y: landmarks.map((_, k) => -k) } });
-    await settle(30);
+    await written(first.actions);
     const reload = page(storage);
     await reload.actions.startSession();
     await reload.actions.restoreFromFile(new File([csv], "grid.csv"));
@@ -109,7 +129,7 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     await reload.actions.startSession();
     await reload.actions.startAfresh();
     expect(reload.store.getState()).toMatchObject({ source: { isDemo: true }, sessionRestore: { state: "none" } });
-    await settle(30);
+    await written(reload.actions);
     const kept = await storage.get<{ file: { name: string } }>("session");
     expect(kept?.file.name).toBe("pump-fleet.csv");
   });
@@ -119,7 +139,7 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     const first = await work(storage);
     expect(await storage.get("table-bytes")).toBeUndefined();
     await first.actions.setKeepTable(true);
-    await settle(30);
+    await written(first.actions);
     expect(first.store.getState().kept).toEqual({ session: true, tableBytes: csv.length });
     expect((await storage.get<{ bytes: Uint8Array }>("table-bytes"))?.bytes.length).toBe(csv.length);
     const before = view(first.store);
@@ -137,8 +157,7 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     const first = await work(storage);
     await first.actions.setKeepTable(true);
     await first.actions.loadFile(new File([otherCsv], "other.csv"));
-    await settle(30);
-    expect(first.store.getState()).toMatchObject({ keepTable: false, kept: { tableBytes: null } });
+    await vi.waitFor(() => expect(first.store.getState()).toMatchObject({ keepTable: false, kept: { tableBytes: null } }));
     expect(await storage.get("table-bytes")).toBeUndefined();
   });
 
@@ -146,12 +165,12 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     const storage = freshStorage();
     const first = await work(storage);
     await first.actions.setKeepTable(true);
-    await settle(30);
+    await written(first.actions);
     await first.actions.forgetSession();
     expect(await storage.keys()).toEqual([]);
     expect(first.store.getState()).toMatchObject({ keepTable: false, kept: { session: false, tableBytes: null } });
     first.store.setState({ layoutPositions: { landmarks: [0], x: [0], y: [0] } }); // a layout coming to rest is no change of the user's
-    await settle(30);
+    await written(first.actions);
     expect(await storage.keys()).toEqual([]);
     const reload = page(storage);
     await reload.actions.startSession();
@@ -166,7 +185,7 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     await first.actions.startSession();
     await first.actions.setRadius(0.9);
     first.actions.selectNodes([0, 1]);
-    await settle(30);
+    await written(first.actions);
     const before = view(first.store);
     const reload = page(storage);
     await reload.actions.startSession();
@@ -179,5 +198,7 @@ describe("the session kept in IndexedDB (fake-indexeddb)", () => {
     const { store, actions } = page(storage);
     await actions.startSession();
     expect(store.getState()).toMatchObject({ source: { isDemo: true }, sessionRestore: { state: "failed", error: "the kept session could not be read: kept session: bad file" } });
+    await written(actions);
+    expect(await storage.get<{ file: { name: string } }>("session")).toMatchObject({ file: { name: "pump-fleet.csv" } }); // work goes on, and is kept
   });
 });

@@ -102,8 +102,12 @@ export function createHistoryActions(store: WorkbenchStore, bridge: RecipeBridge
     undo: (): Promise<void> => step(history.undo()),
     /** Shows the step after the current one, if an undo went back (Ctrl+Shift+Z, Ctrl+Y). */
     redo: (): Promise<void> => step(history.redo()),
-    /** Takes the step now rather than at the next change (tests; a settled store records on its own). */
-    recordStep: recordNow,
+    /** Forgets every step; the state now (once settled) is the first (a restored session starts its own history). */
+    restartHistory(): void {
+      history.reset();
+      publish();
+      recordNow();
+    },
   };
 }
 

@@ -49,13 +49,10 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
 
   const restore = (sessionRestore: SessionRestore): void => set({ sessionRestore });
 
-  async function save(): Promise<void> {
-    if (timer !== null) clearTimeout(timer);
-    timer = null;
-    if (!dirty || quiet) return;
-    dirty = false;
-    const record = keptSessionOf(store.getState(), env.recipes.recipeOf);
-    if (!record) return;
+  // writes run one after another, so an older record never lands after a newer one
+  let writing: Promise<void> = Promise.resolve();
+
+  async function write(record: KeptSession): Promise<void> {
     try {
       await env.storage.set("session", record);
       set({ kept: { ...store.getState().kept, session: true }, sessionError: null });
@@ -64,9 +61,21 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
     }
   }
 
+  /** Writes the pending change, if any; resolves once every write asked for so far is done. */
+  function save(): Promise<void> {
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+    if (!dirty || quiet) return writing;
+    dirty = false;
+    const record = keptSessionOf(store.getState(), env.recipes.recipeOf);
+    if (record) writing = writing.then(() => write(record));
+    return writing;
+  }
+
   store.subscribe((state, previous) => {
     if (state.source !== previous.source && !restoreLoad) onNewTable(state, previous);
-    if (state.sessionRestore.state !== "none") return;
+    // while a session is being restored (or waits for its file) what is kept stays; after a failed restore, work goes on and is kept
+    if (state.sessionRestore.state !== "none" && state.sessionRestore.state !== "failed") return;
     const changed = watched.some((key) => state[key] !== previous[key]);
     if (changed) quiet = false;
     if (quiet || !(changed || state.layoutPositions !== previous.layoutPositions || state.keepTable !== previous.keepTable)) return;
@@ -76,7 +85,7 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
 
   /** A table the user brought in (not the restore's): a pending restore is given up, and the last table's kept bytes go. */
   function onNewTable(state: WorkbenchState, previous: WorkbenchState): void {
-    if (state.sessionRestore.state === "needs-file" || state.sessionRestore.state === "other-file") {
+    if (state.sessionRestore.state === "needs-file" || state.sessionRestore.state === "other-file" || state.sessionRestore.state === "failed") {
       restoring = null;
       restore({ state: "none" });
     }
@@ -136,7 +145,7 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
       restore({ state: "failed", file: record.file, error: s.loadError ?? "the table could not be read" });
       return;
     }
-    const found = env.recipes.recipeOf(s)?.input.sha256 ?? null;
+    const found = s.inputFingerprint?.sha256 ?? null;
     if (!record.file.isDemo && found !== record.file.sha256) {
       restore({ state: "other-file", file: record.file, foundSha256: found });
       return;
@@ -170,7 +179,7 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
         set({ kept: { session: value !== undefined, tableBytes: keptBytes?.bytes.length ?? null } });
       } catch (error) {
         restore({ state: "failed", file: null, error: `the kept session could not be read: ${message(error)}` });
-        await env.loadDemo();
+        await loadForRestore(env.loadDemo); // the message stays up over the demo
         return;
       }
       if (!record) {
@@ -210,6 +219,7 @@ export function createSessionActions(store: WorkbenchStore, env: SessionEnvironm
       timer = null;
       dirty = false;
       quiet = true;
+      await writing; // a write under way would bring the session back after the clear
       try {
         await env.storage.clear();
         set({ keepTable: false, kept: { session: false, tableBytes: null }, sessionError: null });

@@ -49,6 +49,9 @@ export function createKeepingActions(store: WorkbenchStore, env: KeepingEnvironm
   };
   const history = createHistoryActions(store, recipes);
   const session = createSessionActions(store, { storage: env.storage ?? idbSessionStorage(), recipes, loadDemo: env.loadDemo, loadFile: env.loadFile, loadedSource: env.loadedSource, ...(env.saveDelayMs === undefined ? {} : { saveDelayMs: env.saveDelayMs }) });
+  store.subscribe((state, previous) => {
+    if (previous.sessionRestore.state !== "none" && state.sessionRestore.state === "none") history.restartHistory();
+  });
   if (typeof document !== "undefined") {
     const flush = (): void => void session.flushSession();
     window.addEventListener("pagehide", flush);
