@@ -141,3 +141,48 @@ it("forget this session (confirmed), reload: the demo with its defaults", async 
   expect(await workbenchState(page)).toEqual(defaults);
   expect(errors).toEqual([]);
 });
+
+// Invented rows for the file case: two clusters of 40 in (a, b), with a class column.
+const fileRows = Array.from({ length: 80 }, (_, i) => `${((i % 8) + (i < 40 ? 0 : 20)) * 0.5},${(i % 5) * 0.7 + (i < 40 ? 0 : 9)},${i % 3}`);
+const fileCsv = `a,b,class\n${fileRows.join("\n")}\n`;
+const otherCsv = fileCsv.replace("\n0,0,0\n", "\n0,0,2\n"); // one cell differs, so another fingerprint
+
+it("a file's session: the reload asks for the file by name and fingerprint; the same file restores it, another one warns with both fingerprints and applies on request", async () => {
+  const { page } = session.browser();
+  const errors = recordPageErrors(page);
+  await openWorkbench(page);
+  await page.getByTestId("file-input").setInputFiles({ name: "plots.csv", mimeType: "text/csv", buffer: Buffer.from(fileCsv) });
+  await page.getByText("plots.csv").first().waitFor();
+  await page.getByTestId("node-count").waitFor();
+  const radius = Number(await page.locator("#radius-number").inputValue());
+  const before = await page.getByTestId("node-count").textContent();
+  await page.locator("#radius-number").fill(String(radius * 0.6));
+  await page.locator("#radius-number").press("Enter");
+  await page.waitForFunction((old) => document.querySelector("[data-testid=node-count]")?.textContent !== old, before);
+  const kept = { radius: await page.locator("#radius-number").inputValue(), nodes: await page.getByTestId("node-count").textContent() };
+  await page.waitForTimeout(1500); // written 500 ms after the last change
+
+  await page.reload();
+  const prompt = page.getByTestId("session-restore");
+  await expect.poll(() => prompt.textContent(), { timeout: 30_000 }).toMatch(new RegExp(`^Open plots\\.csv \\(${Buffer.byteLength(fileCsv)} bytes, sha256 [0-9a-f]{12}\\) to restore the session`)); // the file's size under 1,000 bytes is shown in bytes
+  await saveScreenshot(page, "session-asks-for-file");
+  await page.getByTestId("session-file-input").setInputFiles({ name: "plots.csv", mimeType: "text/csv", buffer: Buffer.from(fileCsv) });
+  await expect.poll(() => prompt.count(), { timeout: 60_000 }).toBe(0);
+  await expect.poll(() => page.locator("#radius-number").inputValue()).toBe(kept.radius);
+  await expect.poll(() => page.getByTestId("node-count").textContent()).toBe(kept.nodes);
+
+  await page.reload();
+  await page.getByTestId("session-file-input").waitFor({ state: "attached" });
+  await page.getByTestId("session-file-input").setInputFiles({ name: "plots.csv", mimeType: "text/csv", buffer: Buffer.from(otherCsv) });
+  const warning = page.getByTestId("session-restore").getByRole("alert");
+  await warning.waitFor();
+  const fingerprints = (await warning.locator("code").allTextContents());
+  expect(fingerprints).toHaveLength(2);
+  expect(fingerprints[0]).not.toBe(fingerprints[1]);
+  fingerprints.forEach((f) => expect(f).toMatch(/^[0-9a-f]{64}$/));
+  await saveScreenshot(page, "session-other-file");
+  await page.getByRole("button", { name: "Apply the session anyway" }).click();
+  await expect.poll(() => page.getByTestId("session-restore").count(), { timeout: 60_000 }).toBe(0);
+  await expect.poll(() => page.locator("#radius-number").inputValue()).toBe(kept.radius);
+  expect(errors).toEqual([]);
+});
