@@ -3,7 +3,7 @@ import type { WorkbenchState, WorkbenchStore } from "../store.ts";
 import { isSettled } from "./isSettled.ts";
 import { createUndoHistory, defaultHistoryCap } from "./undoHistory.ts";
 import { whenSettled } from "./whenSettled.ts";
-import { snapshotKey, workbenchSnapshot, type WorkbenchSnapshot } from "./workbenchSnapshot.ts";
+import { snapshotKey, snapshotRecipe, workbenchSnapshot, type WorkbenchSnapshot } from "./workbenchSnapshot.ts";
 
 /** The recipe's two directions, from wip/recipe's recipeFromState and applyRecipe. */
 export interface RecipeBridge {
@@ -15,7 +15,7 @@ export interface RecipeBridge {
 // the fields whose change may make a new undo step (the others are views, progress or results)
 const watched = [
   "roles", "scale", "metric", "radius", "landmarks", "seed", "missing", "weights", "colorBy", "colorLevel", "regions", "activeRegionId", "selection", "result", "build",
-  "readOptions", "hotspotScan",
+  "readOptions",
 ] as const satisfies readonly (keyof WorkbenchState)[];
 
 /**
@@ -73,7 +73,7 @@ export function createHistoryActions(store: WorkbenchStore, bridge: RecipeBridge
         const snapshot = target;
         target = null;
         await whenSettled(store);
-        const now = bridge.recipeOf(store.getState());
+        const now = snapshotRecipe(store.getState(), bridge.recipeOf);
         // the same recipe (a selection step) is not applied again: no rebuild, the layout stays
         const refusal = now && JSON.stringify(now) === JSON.stringify(snapshot.recipe) ? null : await bridge.apply(snapshot.recipe);
         await whenSettled(store);
