@@ -1,7 +1,8 @@
-import { buildCover, featureWeights, readingRecord, defaultRadius, type CoverParams, type CoverResult, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
+import { buildCover, featureWeights, readingRecord, defaultRadius, type CoverParams, type CoverResult, type FileFingerprint, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
 import { resolveFeatures, type CommonOptions } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readInput } from "./readInput.ts";
+import { checkRecipeInput, needsFingerprint } from "./recipeOfRun.ts";
 
 export interface FileBuild extends ReadOutcome {
   readonly fileName: string;
@@ -9,13 +10,16 @@ export interface FileBuild extends ReadOutcome {
   readonly radius: number;
   readonly result: CoverResult;
   readonly reading: ReadingRecord;
+  /** Size and SHA-256 of the input when a recipe is read or written, else null. */
+  readonly fingerprint: FileFingerprint | null;
   /** Milliseconds the build took. */
   readonly elapsed: number;
 }
 
 /** Reads a file through the core reader and builds the cover graph with the command's options, as `shoal build` does (`explain` too). */
 export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, "input" | "radius" | "read">): Promise<FileBuild> {
-  const { table, report, fileName, fileSize } = await readInput(command.input, command.read);
+  const { table, report, fileName, fileSize, fingerprint } = await readInput(command.input, command.read, needsFingerprint(command.recipe));
+  checkRecipeInput(command.recipe, fileName, fingerprint);
   const features = resolveFeatures(table, command);
   for (const name of command.outcomes) {
     if (table.columns.find((c) => c.name === name)!.kind !== "numeric") throw new Error(`not a numeric column: ${name}`);
@@ -33,5 +37,5 @@ export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, 
   const result = buildCover(table, params, { now: () => performance.now() });
   const elapsed = performance.now() - started;
   const reading = readingRecord(report.format, command.read.ragged);
-  return { table, report, fileName, fileSize, radius, result, reading, elapsed };
+  return { table, report, fileName, fileSize, radius, result, reading, fingerprint, elapsed };
 }

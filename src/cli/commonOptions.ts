@@ -1,15 +1,20 @@
+import type { RecipeUse } from "./recipeOptions.ts";
 import { maybeLandmarkRule, maybeMetric, maybeMissingPolicy, maybeScale, parseNumber, type CoverParams, type ParsedTable } from "../core/index.ts";
 
-/** The data and landmark options every headless command shares, as node:util parseArgs options. */
+/**
+ * The data and landmark options every headless command shares, as node:util parseArgs options.
+ * No defaults here: an option not typed stays undefined, so a recipe's value can fill it, and
+ * `readCommonOptions` fills the rest with the defaults.
+ */
 export const commonOptionSpec = {
   columns: { type: "string" },
   id: { type: "string" },
   outcome: { type: "string" },
-  scale: { type: "string", default: "zscore" },
-  metric: { type: "string", default: "euclidean" },
-  landmarks: { type: "string", default: "greedy-file-order" },
-  seed: { type: "string", default: "1" },
-  missing: { type: "string", default: "drop" },
+  scale: { type: "string" },
+  metric: { type: "string" },
+  landmarks: { type: "string" },
+  seed: { type: "string" },
+  missing: { type: "string" },
   weights: { type: "string" },
   "one-hot": { type: "string" },
 } as const;
@@ -32,6 +37,8 @@ export interface CommonOptions {
   readonly idColumn: string | null;
   readonly outcomes: readonly string[];
   readonly params: Omit<CoverParams, "features" | "radius">;
+  /** The --recipe read, its file, and --save-recipe / --allow-other-file (absent: none of them). */
+  readonly recipe?: RecipeUse;
 }
 
 /** Comma-separated names, trimmed, empty ones dropped. */
@@ -40,7 +47,7 @@ export function listOption(text: string | undefined): string[] {
 }
 
 /** Checks and normalizes the shared options (numbers by parseNumber, as the table's cells); throws one clear message for anything wrong. */
-export function readCommonOptions(values: { readonly [K in keyof typeof commonOptionSpec]?: string | undefined }): CommonOptions {
+export function readCommonOptions(values: { readonly [K in keyof typeof commonOptionSpec]?: string | undefined }, recipe?: RecipeUse): CommonOptions {
   const seed = parseNumber(values.seed ?? "1");
   if (!Number.isInteger(seed)) throw new Error(`invalid seed: ${values.seed}`);
   return {
@@ -56,6 +63,7 @@ export function readCommonOptions(values: { readonly [K in keyof typeof commonOp
       weights: parseWeights(listOption(values.weights)),
       ...(values["one-hot"] === undefined ? {} : { oneHot: listOption(values["one-hot"]) }),
     },
+    ...(recipe ? { recipe } : {}),
   };
 }
 

@@ -2,7 +2,7 @@ import { parseNumber, type ByteReadOptions } from "../core/index.ts";
 import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
 import { numberList, type RowChoice } from "./regionArgs.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface BuildCommand extends CommonOptions {
   readonly input: string;
@@ -23,11 +23,12 @@ export const buildUsage = `usage: shoal build DATA --out DIR [options]
                       cells as read, and list the region in summary.json
   --region-name NAME  the region's name in region-rows.csv and summary.json (default region)
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 /** Parses `shoal build …` arguments; throws one clear message for anything wrong. */
 export function parseBuildArgs(args: readonly string[]): BuildCommand {
-  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" } });
+  const { values, positionals, recipe } = argsWithRecipe(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, radius: { type: "string" }, "region-nodes": { type: "string" }, "region-name": { type: "string" } });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out DIR");
   let radius: number | null = null;
@@ -40,5 +41,5 @@ export function parseBuildArgs(args: readonly string[]): BuildCommand {
   if (!choice && values["region-name"] !== undefined) throw new Error("--region-name needs --region-nodes");
   if (values["region-name"] === "") throw new Error("invalid --region-name: an empty name");
   const region = choice ? { name: values["region-name"] ?? "region", choice } : null;
-  return { ...readCommonOptions(values), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region };
+  return { ...readCommonOptions(values, recipe), input: positionals[0]!, outDir: values.out, radius, read: readByteOptions(values), region };
 }

@@ -2,7 +2,7 @@ import { parseNumber, type ByteReadOptions } from "../core/index.ts";
 import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
 import { rowChoice, type RowChoice } from "./regionArgs.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface ExplainCommand extends CommonOptions {
   readonly input: string;
@@ -24,12 +24,13 @@ export const explainUsage = `usage: shoal explain DATA (--nodes 3,4,7 | --rows 1
   --out FILE          write the region table there (default: standard output)
   --radius R          ball radius (default: the workbench's default-radius rule)
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 /** Parses `shoal explain …` arguments; throws one clear message for anything wrong. */
 export function parseExplainArgs(args: readonly string[]): ExplainCommand {
   const spec = { nodes: { type: "string" }, rows: { type: "string" }, "versus-nodes": { type: "string" }, "versus-rows": { type: "string" }, out: { type: "string" }, radius: { type: "string" } } as const;
-  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, ...spec });
+  const { values, positionals, recipe } = argsWithRecipe(args, { ...commonOptionSpec, ...readOptionSpec, ...spec });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   const region = rowChoice("--nodes", values.nodes, "--rows", values.rows);
   if (!region) throw new Error("missing --nodes or --rows: the region to explain");
@@ -40,5 +41,5 @@ export function parseExplainArgs(args: readonly string[]): ExplainCommand {
     if (!(radius > 0)) throw new Error(`invalid radius: ${values.radius}`);
   }
   if (values.out === "") throw new Error("invalid --out: an empty file name");
-  return { ...readCommonOptions(values), input: positionals[0]!, outFile: values.out ?? null, radius, read: readByteOptions(values), region, versus };
+  return { ...readCommonOptions(values, recipe), input: positionals[0]!, outFile: values.out ?? null, radius, read: readByteOptions(values), region, versus };
 }

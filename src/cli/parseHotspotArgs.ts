@@ -2,7 +2,7 @@ import { hotspotDefaults, parseNumber, type HotspotDirection, type HotspotScore 
 import { commonOptionSpec, commonUsage, readCommonOptions } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface HotspotCommand extends Omit<BuildCommand, "region"> {
   /** The outcome column scanned. */
@@ -29,7 +29,8 @@ export const hotspotsUsage = `usage: shoal hotspots DATA --scan COLUMN --out DIR
   --scan-seed N       integer seed of the permutations and the bootstrap (default ${hotspotDefaults.scanSeed}); --seed stays the landmark seed
   --stability-seeds k rebuild with k other landmark seeds and report how often each hotspot is found again (default 0: off)
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 const wholeNumber = (flag: string, text: string | undefined, fallback: number, least: number, most = Infinity): number => {
   if (text === undefined) return fallback;
@@ -41,7 +42,7 @@ const wholeNumber = (flag: string, text: string | undefined, fallback: number, l
 /** Parses `shoal hotspots …` arguments; throws one clear message for anything wrong. */
 export function parseHotspotArgs(args: readonly string[]): HotspotCommand {
   const spec = { out: { type: "string" }, radius: { type: "string" }, scan: { type: "string" }, direction: { type: "string" }, "max-nodes": { type: "string" }, replicates: { type: "string" }, score: { type: "string" }, "scan-seed": { type: "string" }, "stability-seeds": { type: "string" } } as const;
-  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, ...spec });
+  const { values, positionals, recipe } = argsWithRecipe(args, { ...commonOptionSpec, ...readOptionSpec, ...spec });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   if (!values.out) throw new Error("missing --out DIR");
   if (!values.scan) throw new Error("missing --scan COLUMN: the outcome to search");
@@ -54,7 +55,7 @@ export function parseHotspotArgs(args: readonly string[]): HotspotCommand {
   if (direction !== "high" && direction !== "low" && direction !== "both") throw new Error(`invalid --direction: ${direction} (high, low or both)`);
   const score = values.score ?? null;
   if (score !== null && score !== "bernoulli" && score !== "normal" && score !== "rank") throw new Error(`invalid --score: ${score} (bernoulli, normal or rank)`);
-  const common = readCommonOptions(values);
+  const common = readCommonOptions(values, recipe);
   // the scanned column is never a feature, as an outcome is not
   const outcomes = common.outcomes.includes(values.scan) ? common.outcomes : [...common.outcomes, values.scan];
   return {

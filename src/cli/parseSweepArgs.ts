@@ -1,7 +1,7 @@
 import { parseNumber, type ByteReadOptions } from "../core/index.ts";
 import { commonOptionSpec, commonUsage, readCommonOptions, type CommonOptions } from "./commonOptions.ts";
 import { readByteOptions, readOptionSpec, readUsage } from "./readInput.ts";
-import { strictArgs } from "./strictArgs.ts";
+import { argsWithRecipe, recipeUsage } from "./recipeOptions.ts";
 
 export interface SweepCommand extends CommonOptions {
   readonly input: string;
@@ -21,11 +21,12 @@ export const sweepUsage = `usage: shoal sweep DATA [--out FILE] [options]
   --radius-max B      largest radius (default: from the data)
   --steps K           number of radii, log-spaced from A to B (default 24)
 ${commonUsage}
-${readUsage}`;
+${readUsage}
+${recipeUsage}`;
 
 /** Parses `shoal sweep …` arguments; throws one clear message for anything wrong. */
 export function parseSweepArgs(args: readonly string[]): SweepCommand {
-  const { values, positionals } = strictArgs(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, "radius-min": { type: "string" }, "radius-max": { type: "string" }, steps: { type: "string", default: "24" } });
+  const { values, positionals, recipe } = argsWithRecipe(args, { ...commonOptionSpec, ...readOptionSpec, out: { type: "string" }, "radius-min": { type: "string" }, "radius-max": { type: "string" }, steps: { type: "string" } });
   if (positionals.length !== 1) throw new Error(`expected one input file, got ${positionals.length}`);
   const radius = (text: string | undefined): number | null => {
     if (text === undefined) return null;
@@ -36,9 +37,9 @@ export function parseSweepArgs(args: readonly string[]): SweepCommand {
   const radiusMin = radius(values["radius-min"]);
   const radiusMax = radius(values["radius-max"]);
   if (radiusMin !== null && radiusMax !== null && !(radiusMin < radiusMax)) throw new Error(`invalid radius range: ${radiusMin} to ${radiusMax}`);
-  const steps = parseNumber(values.steps ?? "");
+  const steps = parseNumber(values.steps ?? "24");
   if (!Number.isInteger(steps) || steps < 2) throw new Error(`invalid steps: ${values.steps}`);
   if (values.out === "") throw new Error("invalid --out: an empty file name");
-  return { ...readCommonOptions(values), input: positionals[0]!, outFile: values.out ?? null, radiusMin, radiusMax, steps, read: readByteOptions(values) };
+  return { ...readCommonOptions(values, recipe), input: positionals[0]!, outFile: values.out ?? null, radiusMin, radiusMax, steps, read: readByteOptions(values) };
 }
 

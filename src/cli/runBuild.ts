@@ -4,6 +4,7 @@ import type { BuildCommand } from "./parseBuildArgs.ts";
 import { chosenRows } from "./regionArgs.ts";
 import { readRegionTexts } from "./readRegionTexts.ts";
 import { writeFileSet } from "./writeFileSet.ts";
+import { recipeOfRun, recipeRegionRows, recipeToSave, saveRecipe } from "./recipeOfRun.ts";
 
 /**
  * Reads the table through the same core parser as the workbench, builds, and writes the same
@@ -13,8 +14,10 @@ import { writeFileSet } from "./writeFileSet.ts";
  * and a run without a region removes an earlier region-rows.csv.
  */
 export async function runBuild(command: BuildCommand): Promise<string> {
-  const { table, report, fileName, fileSize, radius, result, reading, elapsed } = await buildFromFile(command);
-  const regions = command.region ? [{ name: command.region.name, rows: chosenRows(command.region.choice, result) }] : [];
+  const { table, report, fileName, fileSize, radius, result, reading, fingerprint, elapsed } = await buildFromFile(command);
+  const kept = recipeRegionRows(command.recipe, result.rowsRead);
+  if (command.region && kept.some((r) => r.name === command.region!.name)) throw new Error(`--region-name is the name of a region of the recipe: ${command.region.name}`);
+  const regions = [...kept, ...(command.region ? [{ name: command.region.name, rows: chosenRows(command.region.choice, result) }] : [])];
   const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading, regions });
   const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
   const regionFiles: Record<string, string> = {};
@@ -24,6 +27,7 @@ export async function runBuild(command: BuildCommand): Promise<string> {
     regionFiles["region-rows.csv"] = regionRowsCsv(regions, table.columns.map((c) => c.name), texts, decimal);
   }
 
+  const recipe = recipeToSave(command.recipe, () => recipeOfRun(command, { fileName, fingerprint: fingerprint!, read: command.read, params: result.params, regions }));
   await writeFileSet(command.outDir, {
     "nodes.csv": files["nodes.csv"],
     "members.csv": files["members.csv"],
@@ -31,8 +35,9 @@ export async function runBuild(command: BuildCommand): Promise<string> {
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
     ...regionFiles,
   });
+  const saved = await saveRecipe(command.recipe, recipe);
   const loops = result.betti ? `, b1 ${result.betti.b1}` : "";
   const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? "" : "s"}`;
-  const region = regions[0] ? `; region ${regions[0].name}: ${count(regions[0].rows.length, "row")}` : "";
-  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")} (b0), cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}${region}; wrote ${command.outDir}`;
+  const region = regions.map((r) => `; region ${r.name}: ${count(r.rows.length, "row")}`).join("");
+  return `${count(result.landmarks.length, "node")}, ${count(result.edges.source.length, "edge")}, ${count(result.componentCount, "component")} (b0), cycle rank ${result.cycleRank}${loops} at radius ${radius}; rows used ${result.usedRows.length} of ${result.rowsRead}${region}; wrote ${command.outDir}${saved}`;
 }

@@ -3,6 +3,7 @@ import { buildFromFile } from "./buildFromFile.ts";
 import type { ExplainCommand } from "./parseExplainArgs.ts";
 import { chosenRows } from "./regionArgs.ts";
 import { writeFileWhole } from "./writeFileWhole.ts";
+import { recipeOfRun, recipeRegionRows, recipeToSave, saveRecipe } from "./recipeOfRun.ts";
 
 /**
  * Builds as `shoal build` does, then writes the region table (`regionTable`) of the chosen rows
@@ -11,7 +12,10 @@ import { writeFileWhole } from "./writeFileWhole.ts";
  * The region is chosen by looking at the data, so its p-values describe; they do not confirm.
  */
 export async function runExplain(command: ExplainCommand): Promise<string> {
-  const { table, result } = await buildFromFile(command);
+  const { table, result, fileName, fingerprint } = await buildFromFile(command);
+  const recipe = recipeToSave(command.recipe, () =>
+    recipeOfRun(command, { fileName, fingerprint: fingerprint!, read: command.read, params: result.params, regions: recipeRegionRows(command.recipe, result.rowsRead) }),
+  );
   const region = chosenRows(command.region, result);
   const versus = command.versus ? chosenRows(command.versus, result) : undefined;
   const sides = regionSides(result.rowsRead, result.usedRows, region, versus);
@@ -29,11 +33,13 @@ export async function runExplain(command: ExplainCommand): Promise<string> {
     ...(explained.skipped.length > 0 ? [`not tested: ${explained.skipped.map((s) => `${s.column} (${s.reason})`).join(", ")}`] : []),
   ].join("; ");
   if (command.outFile === null) {
-    console.error(`shoal: ${notes}`);
+    const saved = await saveRecipe(command.recipe, recipe);
+    console.error(`shoal: ${notes}${saved}`);
     return csv;
   }
   await writeFileWhole(command.outFile, csv);
-  return `${explained.lines.length} columns compared; ${notes}; wrote ${command.outFile}\n`;
+  const saved = await saveRecipe(command.recipe, recipe);
+  return `${explained.lines.length} columns compared; ${notes}; wrote ${command.outFile}${saved}\n`;
 }
 
 const rows = (n: number): string => `${n} ${n === 1 ? "row" : "rows"}`;

@@ -1,8 +1,9 @@
-import { csvLine, csvNumber, radiusSweep, type RadiusSweep } from "../core/index.ts";
+import { csvLine, csvNumber, defaultRadius, featureWeights, radiusSweep, type CoverParams, type RadiusSweep } from "../core/index.ts";
 import { resolveFeatures } from "./commonOptions.ts";
 import type { SweepCommand } from "./parseSweepArgs.ts";
 import { readInput } from "./readInput.ts";
 import { writeFileWhole } from "./writeFileWhole.ts";
+import { checkRecipeInput, needsFingerprint, recipeOfRun, recipeRegionRows, recipeToSave, saveRecipe } from "./recipeOfRun.ts";
 
 export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1", "cycle_rank", "nodes_per_row", "largest_node_share", "largest_component_share", "plateau", "plateau_middle"];
 
@@ -12,19 +13,32 @@ export const sweepColumns = ["radius", "nodes", "edges", "components", "b0", "b1
  * moved into place, so that a failure leaves nothing half written.
  */
 export async function runSweep(command: SweepCommand): Promise<string> {
-  const { table } = await readInput(command.input, command.read);
+  const { table, fileName, fingerprint } = await readInput(command.input, command.read, needsFingerprint(command.recipe));
+  checkRecipeInput(command.recipe, fileName, fingerprint);
   const features = resolveFeatures(table, command);
+  // a sweep has no radius of its own: the recipe keeps the --recipe's, else the default-radius rule's
+  const recipe = recipeToSave(command.recipe, () => {
+    const weights = featureWeights([...features, ...(command.params.oneHot ?? [])], command.params.weights ?? {});
+    const basis = { ...command.params, features, weights };
+    const radius = command.recipe?.recipe?.radius ?? defaultRadius(table, basis);
+    const params: CoverParams = { ...basis, missing: command.params.missing ?? "drop", radius };
+    return recipeOfRun(command, { fileName, fingerprint: fingerprint!, read: command.read, params, regions: recipeRegionRows(command.recipe, table.rows) });
+  });
   const sweep = radiusSweep(table, { ...command.params, features }, {
     steps: command.steps,
     ...(command.radiusMin === null ? {} : { radiusMin: command.radiusMin }),
     ...(command.radiusMax === null ? {} : { radiusMax: command.radiusMax }),
   });
   const csv = sweepCsv(sweep);
-  if (command.outFile === null) return csv;
+  if (command.outFile === null) {
+    await saveRecipe(command.recipe, recipe);
+    return csv;
+  }
   await writeFileWhole(command.outFile, csv);
+  const saved = await saveRecipe(command.recipe, recipe);
   const { suggestion } = sweep;
   const middle = suggestion ? `plateau middle ${suggestion.radius} (b0 ${suggestion.plateau.b0}, b1 ${suggestion.plateau.b1})` : "no plateau middle";
-  return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${middle}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}\n`;
+  return `${sweep.figures.radius.length} radii from ${sweep.range.min} to ${sweep.range.max}; ${sweep.plateaus.length} plateaus; ${middle}; rows used ${sweep.rowsUsed} of ${sweep.rowsRead}; wrote ${command.outFile}${saved}\n`;
 }
 
 /**

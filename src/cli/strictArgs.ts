@@ -1,6 +1,18 @@
 import { parseArgs } from "node:util";
 
-type StringOptions = Record<string, { type: "string"; default?: string }>;
+/**
+ * Options take a value ("string") or none ("boolean", a switch). There are no defaults here: an
+ * option not typed stays undefined, so a recipe's value can fill it before the defaults do.
+ */
+export type OptionSpec = Record<string, { readonly type: "string" } | { readonly type: "boolean" }>;
+
+export interface ParsedArgs {
+  /** Values of the options that take one, as typed; undefined when not typed. */
+  readonly values: Record<string, string | undefined>;
+  /** The switches typed. */
+  readonly flags: ReadonlySet<string>;
+  readonly positionals: string[];
+}
 
 /**
  * node:util parseArgs in strict mode, with fixes for a command line: a value that starts with "-"
@@ -8,17 +20,18 @@ type StringOptions = Record<string, { type: "string"; default?: string }>;
  * given twice is an error naming it; and parser errors become one lowercase line
  * ("unknown option: --x", "missing value for --out").
  */
-export function strictArgs(args: readonly string[], options: StringOptions): { values: Record<string, string | undefined>; positionals: string[] } {
+export function strictArgs(args: readonly string[], options: OptionSpec): ParsedArgs {
   const joined: string[] = [];
   for (let k = 0; k < args.length; ++k) {
     const token = args[k]!;
     const next = args[k + 1];
-    if (token.startsWith("--") && !token.includes("=") && next !== undefined && /^-[\d.]/.test(next)) {
+    const isSwitch = options[token.slice(2)]?.type === "boolean";
+    if (token.startsWith("--") && !isSwitch && !token.includes("=") && next !== undefined && /^-[\d.]/.test(next)) {
       joined.push(`${token}=${next}`);
       k++;
     } else joined.push(token);
   }
-  let parsed: ReturnType<typeof parseArgs<{ args: string[]; allowPositionals: true; strict: true; options: StringOptions; tokens: true }>>;
+  let parsed: ReturnType<typeof parseArgs<{ args: string[]; allowPositionals: true; strict: true; options: OptionSpec; tokens: true }>>;
   try {
     parsed = parseArgs({ args: joined, allowPositionals: true, strict: true, options, tokens: true });
   } catch (error) {
@@ -34,5 +47,11 @@ export function strictArgs(args: readonly string[], options: StringOptions): { v
     if (seen.has(token.name)) throw new Error(`--${token.name} given twice`);
     seen.add(token.name);
   }
-  return { values: parsed.values as Record<string, string | undefined>, positionals: parsed.positionals };
+  const values: Record<string, string | undefined> = {};
+  const flags = new Set<string>();
+  for (const [name, value] of Object.entries(parsed.values)) {
+    if (typeof value === "string") values[name] = value;
+    else if (value === true) flags.add(name);
+  }
+  return { values, flags, positionals: parsed.positionals };
 }

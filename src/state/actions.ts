@@ -1,4 +1,4 @@
-import { nodeMembers, readingRecord, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
+import { nodeMembers, readingRecord, recipeToJson, type ByteReadOptions, type ParsedTable } from "../core/index.ts";
 import { createWorkerClient, type WorkerClient } from "../worker/client.ts";
 import type { TableSource } from "../worker/protocol.ts";
 import { defaultRoles, type RoleHints } from "./defaultRoles.ts";
@@ -8,6 +8,7 @@ import { createRegionActions } from "./regionActions.ts";
 import { firstFreeRegionName, renameRefusal } from "./regionNames.ts";
 import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { createRecipeActions, type RecipeActions } from "./recipeActions.ts";
+import { recipeFromState } from "./recipeFromState.ts";
 import { createKeepingActions, type KeepingActions } from "./session/sessionWiring.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
@@ -321,7 +322,8 @@ export function createActions(store: WorkbenchStore, env: ActionEnvironment) {
       const context = { fileName: s.source.fileName, fileSize: s.source.fileSize, idColumn: selectIdColumn(s), outcomes: selectOutcomeNames(s), ...reading, regions };
       const stem = fileStem(s.source.fileName);
       set({ exportStatus: { state: "running", error: null } });
-      const answer = await env.client.send({ type: "exportZip", result: s.result, context });
+      const recipe = recipeFromState(s); // every exported table says how it was made
+      const answer = await env.client.send({ type: "exportZip", result: s.result, context, ...(recipe ? { recipe: recipeToJson(recipe) } : {}) });
       if (ticket !== latestExport) return null;
       if (answer.type !== "zipped") {
         set({ exportStatus: { state: "failed", error: answerError(answer) } });

@@ -1,5 +1,7 @@
 import {
   isRecipeInput,
+  parseRecipe,
+  recipeToJson,
   maybeDelimiter,
   otherFileLine,
   RecipeError,
@@ -8,6 +10,7 @@ import {
   type Recipe,
   type RecipeReading,
 } from "../core/index.ts";
+import { fileStem } from "./answerError.ts";
 import { levelsColor, regionColor } from "./colorChoices.ts";
 import { recipeFromState } from "./recipeFromState.ts";
 import type { ColumnRole } from "./slices/paramsSlice.ts";
@@ -116,7 +119,25 @@ export function createRecipeActions(store: WorkbenchStore, env: RecipeEnvironmen
     return { kind: "applied" };
   }
 
-  return { applyRecipe };
+  return {
+    applyRecipe,
+    /** "Open recipe": a recipe file's text, checked, then applied as `applyRecipe` does; a damaged file is refused whole. */
+    async openRecipe(text: string, options: ApplyRecipeOptions = {}): Promise<RecipeOutcome> {
+      let recipe: Recipe;
+      try {
+        recipe = parseRecipe(text);
+      } catch (error) {
+        return refused(error);
+      }
+      return applyRecipe(recipe, options);
+    },
+    /** "Save recipe": the file to offer (named after the table) and its text, or null while nothing is built from a hashed table. */
+    recipeFile(): { readonly fileName: string; readonly text: string } | null {
+      const s = store.getState();
+      const recipe = recipeFromState(s);
+      return recipe && s.source ? { fileName: `${fileStem(s.source.fileName)}.recipe.json`, text: recipeToJson(recipe) } : null;
+    },
+  };
 }
 
 export type RecipeActions = ReturnType<typeof createRecipeActions>;

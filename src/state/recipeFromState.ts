@@ -4,6 +4,9 @@ import { selectHotspotColumn, selectHotspotScan } from "./hotspotSelectors.ts";
 import { selectFeatureNames, selectIdColumn, selectOneHotNames, selectOutcomeNames } from "./selectors.ts";
 import type { WorkbenchState } from "./store.ts";
 
+/** True when `recipeFromState` has a recipe to give (a table read and hashed, and a radius). */
+export const selectCanWriteRecipe = (s: WorkbenchState): boolean => s.table !== null && s.source !== null && s.inputFingerprint !== null && s.radius > 0;
+
 /**
  * The recipe of what the workbench shows: the input's fingerprint, the reading options chosen,
  * roles, weights, parameters, colour, named regions (by record number) and, when a scan of the
@@ -11,7 +14,7 @@ import type { WorkbenchState } from "./store.ts";
  * radius. Pure: `applyRecipe` (recipeActions.ts) is its inverse on the same table.
  */
 export function recipeFromState(s: WorkbenchState, writtenBy = `shoal ${shoalVersion}`): Recipe | null {
-  if (!s.table || !s.source || !s.inputFingerprint || !(s.radius > 0)) return null;
+  if (!selectCanWriteRecipe(s) || !s.table || !s.source || !s.inputFingerprint) return null;
   const features = selectFeatureNames(s);
   const oneHot = selectOneHotNames(s);
   const { delimiter, decimal, encoding, ragged } = s.readOptions;

@@ -128,7 +128,7 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
           nodeStatistics ??= createNodeStatistics(loaded());
           return { id: request.id, type: "summarised", columns: nodeStatistics(request.rows, request.columns) };
         case "exportZip":
-          return { id: request.id, type: "zipped", bytes: zipExports(coverExports(loaded(), request.result, request.context)) };
+          return { id: request.id, type: "zipped", bytes: zipExports(coverExports(loaded(), request.result, request.context), request.recipe === undefined ? {} : { "recipe.json": request.recipe }) };
         case "regionTable":
           return regionTableAnswer(loaded(), request, { onProgress: (fraction) => progress("region", fraction), shouldStop: () => isStopped(request) });
         case "regionRows":

@@ -49,7 +49,7 @@ export type Request =
   /** Statistics of one node's member rows (parsed-table rows) in the named numeric columns, against all rows. */
   | { readonly id: number; readonly type: "nodeStats"; readonly rows: Uint32Array; readonly columns: readonly string[] }
   /** The export zip of a result built on the worker's table. */
-  | { readonly id: number; readonly type: "exportZip"; readonly result: CoverResult; readonly context: ExportContext }
+  | { readonly id: number; readonly type: "exportZip"; readonly result: CoverResult; readonly context: ExportContext; /** recipe.json's text, packed beside the tables. */ readonly recipe?: string }
   /**
    * The region table of `region` (parsed-table rows) against the rest of a build's used rows, or
    * against `versus`; the build's `rowsRead` and `usedRows` say which rows are on neither side.

@@ -33,7 +33,7 @@ afterEach(() => {
   URL.revokeObjectURL = saved.revokeObjectURL;
 });
 
-it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, members.csv, edges.csv and summary.json", async () => {
+it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, members.csv, edges.csv, summary.json and recipe.json", async () => {
   render(<ExportButton />);
   await loadSmallTable();
   // fake setTimeout for the click alone: the download revokes its URL 10 s later, which must not
@@ -50,7 +50,8 @@ it("clicking it saves small-cover-r1.4.zip whose bytes unzip to nodes.csv, membe
   expect(blobs[0]!.type).toBe("application/zip");
 
   const files = unzipSync(new Uint8Array(await blobs[0]!.arrayBuffer()));
-  expect(Object.keys(files).sort()).toEqual(["edges.csv", "members.csv", "nodes.csv", "summary.json"]);
+  expect(Object.keys(files).sort()).toEqual(["edges.csv", "members.csv", "nodes.csv", "recipe.json", "summary.json"]);
+  expect(JSON.parse(strFromU8(files["recipe.json"]!))).toMatchObject({ shoalRecipe: 1, radius: smallRadius, input: { name: "small.csv" } }); // the recipe of what was exported
   const summary = JSON.parse(strFromU8(files["summary.json"]!)) as { nodes: number; edges: number; components: number; rows: { dropped: number } };
   // 3 nodes, 2 edges, 1 component and 1 dropped row, worked by hand in smallTable.ts
   expect([summary.nodes, summary.edges, summary.components, summary.rows.dropped]).toEqual([3, 2, 1, 1]);

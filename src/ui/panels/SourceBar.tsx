@@ -3,6 +3,7 @@ import { actions } from "../../state/actions.ts";
 import { formatCount } from "../format.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { ExportButton } from "./ExportButton.tsx";
+import { RecipeControls } from "./RecipeControls.tsx";
 
 /** Top bar: where the table comes from, the ways to bring one in, reading progress, and the export. */
 export function SourceBar() {
@@ -62,6 +63,7 @@ export function SourceBar() {
           }}
         />
         <ExportButton />
+        <RecipeControls />
       </div>
     </header>
   );
