@@ -99,7 +99,9 @@ export function createRecipeActions(store: WorkbenchStore, env: RecipeEnvironmen
       const previousReading = before.readOptions;
       await env.reload(reading);
       try {
-        store.setState(recipePatch(store.getState(), recipe, env.takeRegionId));
+        const reread = store.getState();
+        if (reread.loadStatus !== "ready") throw new RecipeError([`the file could not be read with the recipe's reading options: ${reread.loadError ?? "reading stopped"}`]);
+        store.setState(recipePatch(reread, recipe, env.takeRegionId));
       } catch (error) {
         await env.reload(previousReading);
         if (previous) {

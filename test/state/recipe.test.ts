@@ -126,3 +126,18 @@ describe("recipes in the workbench state", () => {
     expect(await recipes.applyRecipe(recipe)).toEqual({ kind: "refused", message: "no table is loaded: open pumps.csv first, then the recipe" });
   });
 });
+
+describe("recipes whose reading options fail", () => {
+  it("a reading the file does not survive is refused, and the table is read back as it was, with its settings", async () => {
+    const { store, base, recipes } = await loaded();
+    await base.setRole("out", "outcome");
+    await base.setRadius(1.5);
+    const before = recipeFromState(store.getState())!;
+    // a semicolon delimiter makes the header one column, so the recipe's columns are gone
+    const recipe: Recipe = { ...before, reading: { ...before.reading, delimiter: "semicolon" } };
+    const outcome = await recipes.applyRecipe(recipe);
+    expect(outcome.kind).toBe("refused");
+    expect(store.getState().readOptions).toEqual({});
+    expect(recipeToJson(recipeFromState(store.getState())!)).toBe(recipeToJson(before));
+  });
+});
