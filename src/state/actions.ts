@@ -9,6 +9,7 @@ import { firstFreeRegionName, renameRefusal } from "./regionNames.ts";
 import { createRegionPaneActions, type RegionPaneActions } from "./regionPaneActions.ts";
 import { createRecipeActions, type RecipeActions } from "./recipeActions.ts";
 import { recipeFromState } from "./recipeFromState.ts";
+import { createKeepingActions, type KeepingActions } from "./session/sessionWiring.ts";
 import { selectTrackedRows } from "./regionSelectors.ts";
 import { selectCoverParams, selectIdColumn, selectOutcomeNames, selectRegionRows, selectStatsColumns } from "./selectors.ts";
 import type { DataSource } from "./slices/dataSlice.ts";
@@ -353,10 +354,10 @@ function mark(name: string): void {
   globalThis.performance?.mark?.(name);
 }
 
-let appActions: (Actions & RegionPaneActions & HotspotActions & RecipeActions) | null = null;
+let appActions: (Actions & RegionPaneActions & HotspotActions & RecipeActions & KeepingActions) | null = null;
 
 /** Actions bound to the application's store and a worker, created on first use (the region pane's and the hotspot pane's composed in). */
-export function actions(): Actions & RegionPaneActions & HotspotActions & RecipeActions {
+export function actions(): Actions & RegionPaneActions & HotspotActions & RecipeActions & KeepingActions {
   if (appActions) return appActions;
   const env: ActionEnvironment = {
     client: createWorkerClient(),
@@ -370,6 +371,7 @@ export function actions(): Actions & RegionPaneActions & HotspotActions & Recipe
   const base = createActions(workbenchStore, env);
   const hotspots = createHotspotActions(workbenchStore, { ...env, takeRegionId: () => nextRegionId++ });
   const recipes = createRecipeActions(workbenchStore, { takeRegionId: () => nextRegionId++, reload: base.reload, setRadius: base.setRadius });
-  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots, ...recipes };
+  const keeping = createKeepingActions(workbenchStore, { ...base, applyRecipe: recipes.applyRecipe, takeRegionId: () => nextRegionId++ }); // undo/redo and the kept session
+  appActions = { ...base, ...createRegionPaneActions(workbenchStore, env, base.loadedSource), ...hotspots, ...recipes, ...keeping };
   return appActions;
 }

@@ -5,13 +5,14 @@ import { initialParams, type ParamsSlice } from "./slices/paramsSlice.ts";
 import { initialRegionPane, type RegionPaneSlice } from "./slices/regionPaneSlice.ts";
 import { initialResult, type ResultSlice } from "./slices/resultSlice.ts";
 import { initialSelection, type SelectionSlice } from "./slices/selectionSlice.ts";
+import { initialSession, type SessionSlice } from "./slices/sessionSlice.ts";
 import { initialStability, type StabilitySlice } from "./slices/stabilitySlice.ts";
 
 /** Inputs (table, parameters, selection) and the latest result; nothing derivable from them. */
-export type WorkbenchState = DataSlice & ParamsSlice & ResultSlice & SelectionSlice & StabilitySlice & RegionPaneSlice & HotspotSlice;
+export type WorkbenchState = DataSlice & ParamsSlice & ResultSlice & SelectionSlice & StabilitySlice & RegionPaneSlice & HotspotSlice & SessionSlice;
 export type WorkbenchStore = StoreApi<WorkbenchState>;
 
-export const initialState: WorkbenchState = { ...initialData, ...initialParams, ...initialResult, ...initialSelection, ...initialStability, ...initialRegionPane, ...initialHotspot };
+export const initialState: WorkbenchState = { ...initialData, ...initialParams, ...initialResult, ...initialSelection, ...initialStability, ...initialRegionPane, ...initialHotspot, ...initialSession };
 
 export function createWorkbenchStore(): WorkbenchStore {
   return createStore<WorkbenchState>()(() => initialState);

@@ -2,6 +2,7 @@ import { forceCollide, forceLink, forceManyBody, forceSimulation, forceX, forceY
 import { useEffect, useMemo, useRef, useState } from "react";
 import type { CoverResult } from "../../core/index.ts";
 import { randomSource } from "../../core/random.ts";
+import { keepLayoutPositions, seedLayoutPositions } from "../../state/session/layoutPositions.ts";
 import { maxDrawnEdges } from "./drawLimits.ts";
 import { nodeRadius } from "./scales.ts";
 import { spiralPlacement } from "./spiralPlacement.ts";
@@ -86,6 +87,7 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
         ++count;
       }
       setPinned(count);
+      const seeded = seedLayoutPositions(result, current.nodes); // a restored session's positions, for this very build
       layout.current = current;
       laidOut.current = result;
       simulation = forceSimulation<LayoutNode>()
@@ -96,8 +98,10 @@ export function useForceLayout(result: CoverResult | null, onTick: (layout: Layo
         .force("collide", forceCollide<LayoutNode>((n) => n.radius + 2))
         .force("x", forceX<LayoutNode>(0).strength(0.05))
         .force("y", forceY<LayoutNode>(0).strength(0.05))
-        .on("tick", () => tick.current(current));
+        .on("tick", () => tick.current(current))
+        .on("end", () => keepLayoutPositions(result, current.nodes));
       simulationRef.current = simulation;
+      if (seeded) simulation.alpha(simulation.alphaMin()); // already at rest: one step, no new layout
       if (pausedRef.current) simulation.stop();
       tick.current(current);
     }, 0);
