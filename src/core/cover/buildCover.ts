@@ -1,10 +1,14 @@
 import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
 import { blockMembershipInto } from "../search/blockMembership.ts";
-import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
+import { closeLists, createListBuilder, reserveLists, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
-import { overlapEdges } from "../nerve/overlapEdges.ts";
-import { Cancelled, lapClock, type PhasedControl, type RunControl } from "../control.ts";
+import { denseLimit, overlapEdges, overlapEdgesPart, type EdgeList } from "../nerve/overlapEdges.ts";
+import { edgeCuts, joinEdgeLists } from "../nerve/edgeParts.ts";
+import { Cancelled, lapClock, partOf, type PhasedControl, type RunControl } from "../control.ts";
+import { indexFromParts, indexParts, type ShareArray } from "../search/indexParts.ts";
+import type { RowIndex } from "../search/rowIndex.ts";
+import { runCoverPart, type CoverTask, type PartOutput, type PartRange } from "./coverParts.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { greedyBalls } from "../landmark/greedyBalls.ts";
@@ -39,6 +43,31 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
   now?: () => number;
   /** Compute triangles and b1 (default true). */
   loops?: boolean;
+  /**
+   * Split the balls found after the net and the edge count into this many parts (default 1).
+   * buildCover runs them one after another in this thread; buildCoverOnThreads gives its runner's
+   * thread count. The result is the same whatever the count.
+   */
+  parts?: number;
+  /** Least work (landmarks × rows for the balls, row pairs for the edges) worth splitting (default 2²², about 10 ms of either). */
+  minPartWork?: number;
+}
+
+/** A step's parts for other threads: the task, their ranges, and the part the build's own thread runs meanwhile. */
+export interface PartRequest {
+  readonly task: CoverTask;
+  readonly remote: readonly PartRange[];
+  readonly local: () => void;
+}
+
+/** The build as steps: it yields each split step's request and is resumed with the remote parts' outputs, in order. */
+export type CoverSteps = Generator<PartRequest, CoverResult, PartOutput[]>;
+
+/** How the split steps split: parts, the least work worth it, and where arrays are shared. */
+interface Split {
+  readonly parts: number;
+  readonly minWork: number;
+  readonly share: ShareArray | null;
 }
 
 /**
@@ -58,7 +87,23 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
  * Cost: O(n·L·d) at worst for n rows, L landmarks, d features, plus the loops step.
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
-  const { onProgress, now = Date.now, loops = true } = options;
+  const steps = coverSteps(parsed, params, options, null);
+  for (let next = steps.next(); ; ) {
+    if (next.done) return next.value;
+    const { task, remote, local } = next.value;
+    local();
+    next = steps.next(remote.map((range) => runCoverPart(task, range, options)));
+  }
+}
+
+/**
+ * buildCover as steps (see CoverSteps): buildCover drives them in one thread, buildCoverOnThreads
+ * on several. `share` copies the arrays a split step sends to other threads into shared memory.
+ */
+export function* coverSteps(parsed: ParsedTable, params: CoverParams, options: BuildOptions, share: ShareArray | null): CoverSteps {
+  const { onProgress, now = Date.now, loops = true, parts = 1, minPartWork = 1 << 22 } = options;
+  if (!(Number.isInteger(parts) && parts >= 1)) throw new Error(`invalid part count: ${parts}`);
+  const split: Split = { parts, minWork: minPartWork, share };
   const enter = (phase: BuildPhase): void => {
     options.onPhase?.(phase);
     onProgress?.(0);
@@ -72,7 +117,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
 
   const lap = lapClock(now);
   enter("scale");
-  const found = landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap });
+  const found = yield* landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap, split });
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -83,7 +128,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const memberTime = lap();
 
   enter("edges");
-  const edges = overlapEdges(rowNodes, centers.length, local);
+  const edges = yield* countEdges(rowNodes, centers.length, local, split);
   const edgeTime = lap();
 
   const { component, count } = components(centers.length, edges.source, edges.target);
@@ -120,7 +165,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
 /** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) as found, packed (search/packedLists.ts). */
 type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
-  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer | null };
+  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBufferLike | null };
 
 /** What a build has settled before it reads the rows: the metric, the rule, its clock and its hooks. */
 interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
@@ -130,6 +175,7 @@ interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
   readonly rule: LandmarkRule;
   /** Milliseconds since the last lap. */
   readonly lap: () => number;
+  readonly split: Split;
 }
 
 interface FoundNet {
@@ -150,8 +196,8 @@ interface FoundNet {
  * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net;
  * the caller times the balls, which it turns into lists by row.
  */
-function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): FoundNet {
-  const { metric, rule, lap, enter, onProgress, shouldStop } = run;
+function* landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): Generator<PartRequest, FoundNet, PartOutput[]> {
+  const { metric, rule, lap, enter, onProgress, shouldStop, split } = run;
   const step = (): void => {
     if (shouldStop?.()) throw new Cancelled("the build");
   };
@@ -172,18 +218,20 @@ function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildR
     const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...control, into: lists });
     const landmarkTime = lap();
     enter("members");
+    let searched = index;
     if (lists.offsets.length - 1 === net.landmarks.length) {
       // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
       lists = createListBuilder(n, { packed: true });
-      blockMembershipInto(lists, index, params.radius, net.landmarks, control);
+      searched = yield* ballsInParts(lists, index, params.radius, net.landmarks, control, split);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
     // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
-    // lists, when it is the build's own whole buffer (prepareFeatures makes it so; checked anyway)
-    const { buffer, byteOffset } = table.values;
-    const spare = buffer instanceof ArrayBuffer && byteOffset === 0 ? buffer : null;
+    // lists, when it is the build's own whole buffer (prepareFeatures makes it so, and so does
+    // sharing it; checked anyway). A shared buffer is no ArrayBuffer, hence the second test.
+    const { buffer, byteOffset } = searched.table.values;
+    const spare = byteOffset === 0 && (buffer instanceof ArrayBuffer || isShared(buffer)) ? buffer : null;
     return { centers, balls: { kind: "positions", lists, rowAt, spare }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
@@ -208,4 +256,56 @@ function atTreePositions(order: Uint32Array, rowAt: Uint32Array): Uint32Array {
 /** For each row, the nodes whose balls hold it, ascending. */
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
   return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
+}
+
+function isShared(buffer: ArrayBufferLike): boolean {
+  return typeof SharedArrayBuffer !== "undefined" && buffer instanceof SharedArrayBuffer;
+}
+
+/**
+ * The balls of `landmarks` appended to `into`, in parts of whole 64-landmark groups when the work
+ * is worth it: this thread appends the first part's lists as it finds them, then the others'
+ * outputs in order. Splitting shares the index once (indexParts) and searches the shared copy
+ * here too, which it returns, so that the unshared table can go. Landmarks are in tree order.
+ */
+function* ballsInParts(into: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl, split: Split): Generator<PartRequest, RowIndex, PartOutput[]> {
+  const groups = Math.ceil(landmarks.length / 64);
+  const parts = landmarks.length * index.table.rows >= split.minWork ? Math.min(split.parts, groups) : 1;
+  if (parts <= 1) {
+    blockMembershipInto(into, index, radius, landmarks, control);
+    return index;
+  }
+  const shared = indexParts(index, radius, split.share ?? ((array) => array));
+  const searched = split.share ? indexFromParts(shared) : index;
+  const per = Math.ceil(groups / parts) * 64;
+  const bounds = Array.from({ length: parts + 1 }, (_, k) => Math.min(k * per, landmarks.length));
+  const remote = bounds.slice(1, -1).map((from, k) => ({ from, to: bounds[k + 2]! }));
+  const outputs = yield {
+    task: { kind: "balls", index: shared, landmarks },
+    remote,
+    local: () => blockMembershipInto(into, searched, radius, landmarks.subarray(0, bounds[1]), partOf(control, 0, bounds[1]! / landmarks.length)),
+  };
+  for (const output of outputs as CompressedLists[]) {
+    reserveLists(into, output.items.length).set(output.items);
+    closeLists(into, output.offsets.subarray(1));
+  }
+  return searched;
+}
+
+/**
+ * overlapEdges in parts of about equal pair counts (edgeCuts) when there are enough pairs: this
+ * thread counts the first range while the others count theirs; the lists join in range order.
+ */
+function* countEdges(rowNodes: CompressedLists, nodes: number, members: CompressedLists, split: Split): Generator<PartRequest, EdgeList, PartOutput[]> {
+  if (split.parts <= 1) return overlapEdges(rowNodes, nodes, members);
+  const { bounds, pairs } = edgeCuts(rowNodes, nodes, split.parts);
+  if (pairs < split.minWork) return overlapEdges(rowNodes, nodes, members);
+  const remote = bounds.slice(1, -1).map((from, k) => ({ from, to: bounds[k + 2]! }));
+  let mine: EdgeList | null = null;
+  const outputs = yield {
+    task: { kind: "edges", rowNodes, nodes, members: nodes > denseLimit ? members : null },
+    remote,
+    local: () => (mine = overlapEdgesPart(rowNodes, nodes, 0, bounds[1]!, members)),
+  };
+  return joinEdgeLists([mine!, ...(outputs as EdgeList[])]);
 }
