@@ -51,7 +51,7 @@ export { edgeCuts, joinEdgeLists } from "./nerve/edgeParts.ts";
 export { components, type Components } from "./nerve/components.ts";
 export { nerveTriangles } from "./nerve/nerveTriangles.ts";
 export { nerveBetti, type NerveBetti } from "./nerve/nerveBetti.ts";
-export { buildCover, type BuildOptions, type BuildPhase, type CoverResult } from "./cover/buildCover.ts";
+export { buildCover, coverSteps, type CoverSteps, type PartRequest, type BuildOptions, type BuildPhase, type CoverResult } from "./cover/buildCover.ts";
 export { buildCoverOnThreads } from "./cover/buildCoverOnThreads.ts";
 export { answerPart, answerTransferables, runCoverPart, type CoverTask, type PartAnswer, type PartMessage, type PartOutput, type PartRange } from "./cover/coverParts.ts";
 export { createPartRunner, type HelperThread, type PartRunner, type PartRunnerOptions } from "./cover/partRunner.ts";

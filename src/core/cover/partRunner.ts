@@ -45,49 +45,58 @@ const stopCheckMs = 20; // how often a wait for helpers asks shouldStop: well in
 export function createPartRunner({ spawn, helpers = 1, share = null, every }: PartRunnerOptions): PartRunner {
   let threads: HelperThread[] = [];
   let nextId = 1;
-  let settle: ((answer: PartAnswer) => void) | null = null;
-  let fail: ((error: unknown) => void) | null = null;
+  // the run waiting for answers: its handlers, replaced by each run and cleared when it settles
+  let current: { readonly settle: (answer: PartAnswer) => void; readonly finish: (error: unknown) => void } | null = null;
   const start = (): HelperThread[] => {
     if (threads.length > 0) return threads;
     threads = Array.from({ length: helpers }, () => {
       const thread = spawn();
       thread.listen(
-        (answer) => settle?.(answer),
-        (error) => threads.includes(thread) && fail?.(error), // a terminated thread's exit is no failure
+        (answer) => current?.settle(answer),
+        (error) => threads.includes(thread) && current?.finish(error instanceof Error ? error : new Error(String(error))), // a terminated thread's exit is no failure
       );
       return thread;
     });
     return threads;
   };
-  const abort = (): void => {
-    for (const thread of threads) thread.terminate();
+  const terminate = (): void => {
+    const stopping = threads;
     threads = [];
+    for (const thread of stopping) thread.terminate();
+  };
+  const abort = (): void => {
+    current?.finish(new Cancelled("the build"));
+    terminate();
   };
   const run = (task: CoverTask, ranges: readonly PartRange[], control: RunControl): Promise<PartOutput[]> => {
     if (ranges.length > helpers) throw new Error(`more parts than helper threads: ${ranges.length}`);
     if (ranges.length === 0) return Promise.resolve([]);
+    current?.finish(new Error("a new run started before the last one ended"));
     const running = start();
     const first = nextId;
     nextId += ranges.length;
     return new Promise<PartOutput[]>((resolve, reject) => {
       const outputs: (PartOutput | undefined)[] = ranges.map(() => undefined);
       let left = ranges.length;
+      let stopTimer = (): void => undefined;
       const finish = (error: unknown): void => {
+        if (current !== self) return;
+        current = null;
         stopTimer();
-        settle = fail = null;
         if (error === null) return resolve(outputs as PartOutput[]);
-        abort();
+        terminate(); // the helpers may be mid-part
         reject(error);
       };
-      settle = (answer) => {
+      const settle = (answer: PartAnswer): void => {
         const k = answer.id - first;
         if (k < 0 || k >= ranges.length || outputs[k] !== undefined) return;
         if ("error" in answer) return finish(new Error(answer.error));
         outputs[k] = answer.output;
         if (--left === 0) finish(null);
       };
-      fail = (error) => finish(error instanceof Error ? error : new Error(String(error)));
-      const stopTimer = every(stopCheckMs, () => {
+      const self = { settle, finish };
+      current = self;
+      stopTimer = every(stopCheckMs, () => {
         if (control.shouldStop?.()) finish(new Cancelled("the build"));
       });
       ranges.forEach((range, k) => running[k]!.post({ id: first + k, task, range }));
