@@ -14,7 +14,7 @@ import type { PartRunner } from "./partRunner.ts";
  */
 export async function buildCoverOnThreads(parsed: ParsedTable, params: CoverParams, runner: PartRunner | null, options: BuildOptions = {}): Promise<CoverResult> {
   if (!runner || runner.threads <= 1) return buildCover(parsed, params, options);
-  const steps = coverSteps(parsed, params, { parts: runner.threads, ...options }, runner.share);
+  const steps = coverSteps(parsed, params, { parts: runner.threads, ...(runner.minPartWork === undefined ? {} : { minPartWork: runner.minPartWork }), ...options }, runner.share);
   for (let next = steps.next(); ; ) {
     if (next.done) return next.value;
     const { task, remote, local } = next.value;

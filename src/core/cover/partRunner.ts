@@ -15,6 +15,8 @@ export interface HelperThread {
 export interface PartRunner {
   /** Threads counting the caller's own. */
   readonly threads: number;
+  /** Least work worth sending to the helpers, where the runner knows better than BuildOptions' default (an option given to the build wins). */
+  readonly minPartWork?: number;
   /** Puts an array where the helpers read it without a copy; null when nothing can be shared (arrays are then copied to each helper). */
   readonly share: ShareArray | null;
   /** The outputs of `ranges`, in order, one helper per range (at most threads − 1 ranges); rejects with Cancelled once `control.shouldStop()` is true. */
