@@ -6,6 +6,9 @@
 // (JS heap + array buffer contents, sampled every 50 ms during the builds, from a collected heap;
 // it includes the table, which the worker shares with the main thread) and the main thread's
 // from its Performance.getMetrics JSHeapUsedSize (typed-array contents not included).
+// The page's worker builds on two threads (a helper worker, src/worker/partWorker.ts) when the
+// split steps have the work for it; Node's two-thread build (worker_threads) is timed beside the
+// one-thread one. The long-task column lists every main-thread task over 50 ms in the builds.
 // Build times are medians: six warm builds in Node (three before the page's and three after, as
 // the machine's speed drifts), three requests in the page (the radius nudged by 10⁻¹² so each is
 // a new request with the same graph); "request→answer" is the worker's part, "→drawn" adds the
@@ -15,9 +18,10 @@ import { mkdir, mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance as nodePerformance } from "node:perf_hooks";
-import { buildCover, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
+import { buildCover, buildCoverOnThreads, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
+import { nodePartRunner } from "../src/cli/nodePartRunner.ts";
 import { launchBrowser, startPreview } from "../test/browser/harness.ts";
-import { longestTask, resetLongTasks, sampleMainHeap, sampleWorkerMemory, watchLongTasks } from "./browserProbes.ts";
+import { longestTask, longTasks, resetLongTasks, sampleMainHeap, sampleWorkerMemory, watchLongTasks } from "./browserProbes.ts";
 import { calibrateRadius } from "./calibrateRadius.ts";
 import { gaussianClusters } from "./syntheticTables.ts";
 
@@ -68,6 +72,16 @@ try {
       }
     };
     timeNode();
+    // the same build on two threads in Node (worker_threads), as the page's worker builds with its helper
+    const runner = nodePartRunner({ threads: 2 });
+    const twoThreadTimes: number[] = [];
+    await buildCoverOnThreads(c.table, nodeParams, runner); // starts the helper
+    for (let r = 0; r < 3; ++r) {
+      const started = nodePerformance.now();
+      await buildCoverOnThreads(c.table, nodeParams, runner);
+      twoThreadTimes.push(nodePerformance.now() - started);
+    }
+    runner?.close();
     const file = join(folder, `${c.table.rows}x${features.length}.csv`);
     await writeFile(file, toCsv(c.table));
 
@@ -117,7 +131,9 @@ try {
     const answeredMs = median(answered);
     const drawnMs = median(drawn);
     const longest = await longestTask(page);
+    const buildTasks = await longTasks(page);
     const workerPeak = workerMemory.peak();
+    const helperPeak = workerMemory.helperPeak();
     timeNode();
     const nodeMs = median(nodeTimes);
 
@@ -159,13 +175,17 @@ try {
       "load s": (loadMs / 1000).toFixed(1),
       "longest main task in load ms": longestInLoad.toFixed(0),
       "Node build ms": nodeMs.toFixed(0),
+      "Node 2-thread build ms": median(twoThreadTimes).toFixed(0),
+      "page helper worker": helperPeak > 0 ? "started" : "not needed or not isolated",
       "browser request→answer ms": answeredMs.toFixed(0),
       "browser request→drawn ms": drawnMs.toFixed(0),
       "ratio drawn ÷ Node": (drawnMs / nodeMs).toFixed(2),
       "longest main task in builds ms": longest.toFixed(0),
+      "main tasks > 50 ms in builds": buildTasks.filter((t) => t > 50).map((t) => t.toFixed(0)).join(" ") || "none",
       "cancel→answer ms": cancelMs.toFixed(0),
       "table survives cancel": survived ? "yes" : "NO",
       "worker peak in builds ÷ table": (workerPeak / tableBytes).toFixed(2),
+      "helper peak ÷ table (shared table included)": (helperPeak / tableBytes).toFixed(2),
       "main heap peak ÷ table": (heap.peak() / tableBytes).toFixed(2),
     });
   }
