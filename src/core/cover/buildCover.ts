@@ -1,14 +1,11 @@
 import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
-import { blockMembershipInto } from "../search/blockMembership.ts";
-import { closeLists, createListBuilder, reserveLists, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
+import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
-import { denseLimit, overlapEdges, overlapEdgesPart, type EdgeList } from "../nerve/overlapEdges.ts";
-import { edgeCuts, joinEdgeLists } from "../nerve/edgeParts.ts";
-import { Cancelled, lapClock, partOf, type PhasedControl, type RunControl } from "../control.ts";
-import { indexFromParts, indexParts, type ShareArray } from "../search/indexParts.ts";
-import type { RowIndex } from "../search/rowIndex.ts";
-import { runCoverPart, type CoverTask, type PartOutput, type PartRange } from "./coverParts.ts";
+import { Cancelled, lapClock, type PhasedControl, type RunControl } from "../control.ts";
+import type { ShareArray } from "../search/indexParts.ts";
+import { runCoverPart, type PartOutput } from "./coverParts.ts";
+import { ballsInParts, countEdges, isShared, type PartRequest, type Split } from "./splitSteps.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { greedyBalls } from "../landmark/greedyBalls.ts";
@@ -20,6 +17,8 @@ import type { CoverGraph } from "./coverGraph.ts";
 import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "../params.ts";
 import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
+
+export type { PartRequest };
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 
@@ -53,22 +52,9 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
   minPartWork?: number;
 }
 
-/** A step's parts for other threads: the task, their ranges, and the part the build's own thread runs meanwhile. */
-export interface PartRequest {
-  readonly task: CoverTask;
-  readonly remote: readonly PartRange[];
-  readonly local: () => void;
-}
-
 /** The build as steps: it yields each split step's request and is resumed with the remote parts' outputs, in order. */
 export type CoverSteps = Generator<PartRequest, CoverResult, PartOutput[]>;
 
-/** How the split steps split: parts, the least work worth it, and where arrays are shared. */
-interface Split {
-  readonly parts: number;
-  readonly minWork: number;
-  readonly share: ShareArray | null;
-}
 
 /**
  * Builds the ball-cover graph: select rows (missing-value policy), scale and weight, leave out
@@ -79,7 +65,9 @@ interface Split {
  * One candidate index (search/rowIndex.ts) serves the net and the balls; it only skips pairs the
  * reference predicate provably rejects. Where it prunes well, each landmark's ball is found when
  * the landmark is placed (search/greedyBalls.ts, search/maximinBalls.ts) and the "members" phase
- * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time.
+ * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time. With
+ * `parts` above 1 those balls and the edge count run in ranges (splitSteps.ts), joined in order:
+ * the same lists as one part.
  * Memory: the scaled rows are the build's one copy of the table; greedy and random nets index
  * them in tree order in place (search/treeOrderIndex.ts), keep the balls packed as varint gaps
  * (search/packedLists.ts), and reuse the rows' buffer for the row → nodes lists once the index
@@ -258,54 +246,3 @@ function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
   return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
 }
 
-function isShared(buffer: ArrayBufferLike): boolean {
-  return typeof SharedArrayBuffer !== "undefined" && buffer instanceof SharedArrayBuffer;
-}
-
-/**
- * The balls of `landmarks` appended to `into`, in parts of whole 64-landmark groups when the work
- * is worth it: this thread appends the first part's lists as it finds them, then the others'
- * outputs in order. Splitting shares the index once (indexParts) and searches the shared copy
- * here too, which it returns, so that the unshared table can go. Landmarks are in tree order.
- */
-function* ballsInParts(into: ListBuilder, index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl, split: Split): Generator<PartRequest, RowIndex, PartOutput[]> {
-  const groups = Math.ceil(landmarks.length / 64);
-  const parts = landmarks.length * index.table.rows >= split.minWork ? Math.min(split.parts, groups) : 1;
-  if (parts <= 1) {
-    blockMembershipInto(into, index, radius, landmarks, control);
-    return index;
-  }
-  const shared = indexParts(index, radius, split.share ?? ((array) => array));
-  const searched = split.share ? indexFromParts(shared) : index;
-  const per = Math.ceil(groups / parts) * 64;
-  const bounds = Array.from({ length: parts + 1 }, (_, k) => Math.min(k * per, landmarks.length));
-  const remote = bounds.slice(1, -1).map((from, k) => ({ from, to: bounds[k + 2]! }));
-  const outputs = yield {
-    task: { kind: "balls", index: shared, landmarks },
-    remote,
-    local: () => blockMembershipInto(into, searched, radius, landmarks.subarray(0, bounds[1]), partOf(control, 0, bounds[1]! / landmarks.length)),
-  };
-  for (const output of outputs as CompressedLists[]) {
-    reserveLists(into, output.items.length).set(output.items);
-    closeLists(into, output.offsets.subarray(1));
-  }
-  return searched;
-}
-
-/**
- * overlapEdges in parts of about equal pair counts (edgeCuts) when there are enough pairs: this
- * thread counts the first range while the others count theirs; the lists join in range order.
- */
-function* countEdges(rowNodes: CompressedLists, nodes: number, members: CompressedLists, split: Split): Generator<PartRequest, EdgeList, PartOutput[]> {
-  if (split.parts <= 1) return overlapEdges(rowNodes, nodes, members);
-  const { bounds, pairs } = edgeCuts(rowNodes, nodes, split.parts);
-  if (pairs < split.minWork) return overlapEdges(rowNodes, nodes, members);
-  const remote = bounds.slice(1, -1).map((from, k) => ({ from, to: bounds[k + 2]! }));
-  let mine: EdgeList | null = null;
-  const outputs = yield {
-    task: { kind: "edges", rowNodes, nodes, members: nodes > denseLimit ? members : null },
-    remote,
-    local: () => (mine = overlapEdgesPart(rowNodes, nodes, 0, bounds[1]!, members)),
-  };
-  return joinEdgeLists([mine!, ...(outputs as EdgeList[])]);
-}
