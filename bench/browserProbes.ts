@@ -54,19 +54,13 @@ export function pageMemory(page: Page): Promise<number> {
  * bench runs gc() before each build, so a peak is not inflated by an earlier step's garbage.
  * Call before page.goto. `reset()` starts a new peak; `peak()` is the largest sample since.
  */
-export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => void; peak: () => number; helperPeak: () => number; collect: () => Promise<void>; stop: () => void }> {
+export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => void; peak: () => number; collect: () => Promise<void>; stop: () => void }> {
   const cdp = await page.context().newCDPSession(page);
   let session: string | null = null;
-  // the build worker's helper (src/worker/partWorker.ts) is sampled apart: it reads the build
-  // worker's SharedArrayBuffers, which its backingStorageSize counts a second time
-  let helper: string | null = null;
-  let helperPeak = 0;
   let nextId = 1;
   const waiting = new Map<number, (result: unknown) => void>();
   cdp.on("Target.attachedToTarget", (event) => {
-    if (event.targetInfo.type !== "worker") return;
-    if (event.targetInfo.url.includes("partWorker")) helper = event.sessionId;
-    else session = event.sessionId;
+    if (event.targetInfo.type === "worker") session = event.sessionId;
   });
   cdp.on("Target.receivedMessageFromTarget", (event) => {
     const message = JSON.parse(event.message) as { id?: number; result?: unknown; error?: { message?: string } };
@@ -76,15 +70,15 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
   });
   await cdp.send("Target.setAutoAttach", { autoAttach: true, waitForDebuggerOnStart: false, flatten: false });
   /** One protocol call in the worker; undefined when there is no worker or no reply within `timeoutMs` (the worker was replaced). */
-  const call = (method: string, timeoutMs: number, target = session): Promise<unknown> => {
-    if (!target) return Promise.resolve(undefined);
+  const call = (method: string, timeoutMs: number): Promise<unknown> => {
+    if (!session) return Promise.resolve(undefined);
     const id = nextId++;
     return new Promise((resolve) => {
       waiting.set(id, resolve);
       setTimeout(() => {
         if (waiting.delete(id)) resolve(undefined);
       }, timeoutMs);
-      cdp.send("Target.sendMessageToTarget", { sessionId: target, message: JSON.stringify({ id, method }) }).catch(() => resolve(undefined));
+      cdp.send("Target.sendMessageToTarget", { sessionId: session!, message: JSON.stringify({ id, method }) }).catch(() => resolve(undefined));
     });
   };
   let peak = 0;
@@ -103,18 +97,11 @@ export async function sampleWorkerMemory(page: Page): Promise<{ reset: () => voi
         }
         peak = Math.max(peak, usage.usedSize + (usage.backingStorageSize ?? 0));
       })
-      .then(() => call("Runtime.getHeapUsage", 2000, helper))
-      .then((result) => {
-        const usage = result instanceof Error ? undefined : (result as HeapUsage | undefined);
-        if (usage) helperPeak = Math.max(helperPeak, usage.usedSize + (usage.backingStorageSize ?? 0));
-      })
       .finally(() => (busy = false));
   }, 50);
   return {
-    reset: () => (peak = helperPeak = 0),
+    reset: () => (peak = 0),
     peak: () => peak,
-    /** The helper worker's largest sample (0 when it never started): its own heap plus the shared table it reads. */
-    helperPeak: () => helperPeak,
     collect: async () => {
       const result = await call("HeapProfiler.collectGarbage", 30_000);
       if (result === undefined || result instanceof Error) console.error(`worker memory probe: no collection before the build (${result instanceof Error ? result.message : "no reply"}); the peak may include older garbage`);
