@@ -52,4 +52,15 @@ describe("buildCoverOnThreads on worker_threads", () => {
     const smallParams = { ...params, features: small.columns.map((c) => c.name), radius: 5 };
     expect(buildArrays(await buildCoverOnThreads(small, smallParams, runner, { minPartWork: 0 }))).toEqual(buildArrays(buildCover(small, smallParams)));
   }, 60_000);
+
+  it("gives buildCover's result when the helper thread cannot start (its parts run in this thread)", async () => {
+    const broken = nodePartRunner({ threads: 2, entry: new URL("./no-such-helper.mjs", import.meta.url) })!;
+    const parsed = uniformCube(400, 12, 5);
+    const params = { features: parsed.columns.map((c) => c.name), scale: "zscore" as const, metric: "euclidean" as const, radius: 2, landmarks: "greedy-file-order" as const, seed: 1 };
+    try {
+      expect(buildArrays(await buildCoverOnThreads(parsed, params, broken, { minPartWork: 0 }))).toEqual(buildArrays(buildCover(parsed, params)));
+    } finally {
+      broken.close();
+    }
+  }, 60_000);
 });

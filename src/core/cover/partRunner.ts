@@ -74,10 +74,11 @@ export function createPartRunner({ spawn, helpers = 1, share = null, every }: Pa
     if (ranges.length > helpers) throw new Error(`more parts than helper threads: ${ranges.length}`);
     if (ranges.length === 0) return Promise.resolve([]);
     current?.finish(new Error("a new run started before the last one ended"));
-    const running = start();
     const first = nextId;
     nextId += ranges.length;
+    // inside the executor, a helper that cannot even be constructed rejects the run instead of throwing
     return new Promise<PartOutput[]>((resolve, reject) => {
+      const running = start();
       const outputs: (PartOutput | undefined)[] = ranges.map(() => undefined);
       let left = ranges.length;
       let stopTimer = (): void => undefined;
