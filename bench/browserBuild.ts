@@ -6,6 +6,11 @@
 // (JS heap + array buffer contents, sampled every 50 ms during the builds, from a collected heap;
 // it includes the table, which the worker shares with the main thread) and the main thread's
 // from its Performance.getMetrics JSHeapUsedSize (typed-array contents not included).
+// The page's worker builds on two threads (a helper worker, src/worker/partWorker.ts) when the
+// split steps have the work for it; Node's two-thread build (worker_threads) is timed beside the
+// one-thread one. The helper is a worker started by the worker, which the DevTools session here
+// does not attach to: its memory is not in "worker peak" (it reads the build worker's shared
+// table and holds one part's lists). The long-task column lists every main-thread task over 50 ms in the builds.
 // Build times are medians: six warm builds in Node (three before the page's and three after, as
 // the machine's speed drifts), three requests in the page (the radius nudged by 10⁻¹² so each is
 // a new request with the same graph); "request→answer" is the worker's part, "→drawn" adds the
@@ -15,11 +20,12 @@ import { mkdir, mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance as nodePerformance } from "node:perf_hooks";
-import { buildCover, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
+import { buildCover, buildCoverOnThreads, euclidean, selectFeatures, zScore, type ParsedTable } from "../src/core/index.ts";
+import { nodePartRunner } from "../src/cli/nodePartRunner.ts";
 import { launchBrowser, startPreview } from "../test/browser/harness.ts";
-import { longestTask, resetLongTasks, sampleMainHeap, sampleWorkerMemory, watchLongTasks } from "./browserProbes.ts";
+import { longestTask, longTasks, resetLongTasks, sampleMainHeap, sampleWorkerMemory, watchLongTasks } from "./browserProbes.ts";
 import { calibrateRadius } from "./calibrateRadius.ts";
-import { gaussianClusters } from "./syntheticTables.ts";
+import { gaussianClusters, uniformCube } from "./syntheticTables.ts";
 
 interface Case {
   readonly name: string;
@@ -30,6 +36,8 @@ interface Case {
 const quick = process.argv.includes("--quick");
 const cases: Case[] = [
   { name: "8 Gaussian clusters 100,000 × 16", table: gaussianClusters(100_000, 16, 8, 2), landmarks: 1000 },
+  // the index prunes little here, so the balls are found after the net: the page's helper worker shares that step
+  { name: "uniform cube 100,000 × 16", table: uniformCube(100_000, 16, 1), landmarks: 1000 },
   ...(quick ? [] : [{ name: "8 Gaussian clusters 1,000,000 × 8", table: gaussianClusters(1_000_000, 8, 8, 3), landmarks: 1000 }]),
 ];
 
@@ -68,6 +76,16 @@ try {
       }
     };
     timeNode();
+    // the same build on two threads in Node (worker_threads), as the page's worker builds with its helper
+    const runner = nodePartRunner({ threads: 2 });
+    const twoThreadTimes: number[] = [];
+    await buildCoverOnThreads(c.table, nodeParams, runner); // starts the helper
+    for (let r = 0; r < 3; ++r) {
+      const started = nodePerformance.now();
+      await buildCoverOnThreads(c.table, nodeParams, runner);
+      twoThreadTimes.push(nodePerformance.now() - started);
+    }
+    runner?.close();
     const file = join(folder, `${c.table.rows}x${features.length}.csv`);
     await writeFile(file, toCsv(c.table));
 
@@ -117,6 +135,7 @@ try {
     const answeredMs = median(answered);
     const drawnMs = median(drawn);
     const longest = await longestTask(page);
+    const buildTasks = await longTasks(page);
     const workerPeak = workerMemory.peak();
     timeNode();
     const nodeMs = median(nodeTimes);
@@ -159,10 +178,12 @@ try {
       "load s": (loadMs / 1000).toFixed(1),
       "longest main task in load ms": longestInLoad.toFixed(0),
       "Node build ms": nodeMs.toFixed(0),
+      "Node 2-thread build ms": median(twoThreadTimes).toFixed(0),
       "browser request→answer ms": answeredMs.toFixed(0),
       "browser request→drawn ms": drawnMs.toFixed(0),
       "ratio drawn ÷ Node": (drawnMs / nodeMs).toFixed(2),
       "longest main task in builds ms": longest.toFixed(0),
+      "main tasks > 50 ms in builds": buildTasks.filter((t) => t > 50).map((t) => t.toFixed(0)).join(" ") || "none",
       "cancel→answer ms": cancelMs.toFixed(0),
       "table survives cancel": survived ? "yes" : "NO",
       "worker peak in builds ÷ table": (workerPeak / tableBytes).toFixed(2),

@@ -17,6 +17,8 @@ export async function watchLongTasks(page: Page): Promise<void> {
 
 export const resetLongTasks = (page: Page): Promise<void> => page.evaluate(() => void ((window as unknown as Probed).__longTasks = []));
 export const longestTask = (page: Page): Promise<number> => page.evaluate(() => Math.max(0, ...(window as unknown as Probed).__longTasks));
+/** Every long task's duration since the last reset, longest first. */
+export const longTasks = (page: Page): Promise<number[]> => page.evaluate(() => [...(window as unknown as Probed).__longTasks].sort((a, b) => b - a));
 
 /** Starts sampling the main thread's JS heap; `peak()` is the largest sample, `stop()` ends sampling. */
 export async function sampleMainHeap(page: Page): Promise<{ peak: () => number; stop: () => void }> {

@@ -3,6 +3,7 @@
 // tests. Each radius is calibrated so that the greedy file-order net has 1,000 ± 10 % landmarks.
 // On the 10,000-row cases the plain computation (bench/plainCover.ts) is timed too and checked
 // to give identical landmarks, balls and edges. --quick (or SHOAL_BENCH_QUICK=1) runs those only.
+// Each case is built again on two threads (bench/threadSteps.ts): the per-step speed-up.
 // Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON).
 import { mkdir, writeFile } from "node:fs/promises";
 import { cpus, loadavg } from "node:os";
@@ -12,6 +13,7 @@ import { calibrateRadius } from "./calibrateRadius.ts";
 import { timeLoops } from "./timeLoops.ts";
 import { memoryProbe, memoryProbeName } from "./memoryProbe.ts";
 import { plainCover } from "./plainCover.ts";
+import { closeThreads, threadColumns } from "./threadSteps.ts";
 import { gaussianClusters, uniformCube } from "./syntheticTables.ts";
 
 interface Case {
@@ -75,6 +77,7 @@ for (const c of cases) {
     "loops ms": loops.skipped ? `skipped (${loops.tripleVisits.toExponential(1)} triples)` : `${ms(loops.ms)} (T ${loops.triangles}, b1 ${loops.b1})`,
     runs: runs.length,
   };
+  Object.assign(row, await threadColumns(parsed, params, runs.map((run) => run.result), repeatsFor(c.rows)));
   if (c.rows <= 10_000) {
     const times: number[] = [];
     let plain = plainCover(scaled, euclidean, calibration.radius);
@@ -96,6 +99,7 @@ for (const c of cases) {
   console.error(`done: ${String(row.case)} (${((Date.now() - started) / 1000).toFixed(0)} s)`);
 }
 
+closeThreads();
 const headers = [...new Set(table.flatMap((row) => Object.keys(row)))];
 const cell = (row: Record<string, string | number>, h: string): string => String(row[h] ?? "");
 const widths = headers.map((h) => Math.max(h.length, ...table.map((row) => cell(row, h).length)));
@@ -104,6 +108,7 @@ const note = [
   `cover build, Euclidean on z-scored columns, greedy file-order net; Node ${process.version}, ${cpus().length} × ${cpus()[0]?.model ?? "cpu"}, clock performance.now()`,
   "times: median of `runs` runs; build = net + members + edges + components (from the scaled table to edges); total adds scaling; cpu = process.cpuUsage() of the whole build",
   `peak B/row: ${memoryProbeName}, above the level before the build, per row`,
+  "2t = buildCoverOnThreads with a worker_threads helper (bench/threadSteps.ts): × = one-thread step ÷ two-thread step; split = the steps that had enough work to split (balls found after the net, the edge count); none = the greedy net found the balls itself and the serial net dominates",
   "loops = nerve triangles and b1 (timed once, skipped above 2.5e7 triple visits Σ C(c, 3)); plain = bench/plainCover.ts on the same scaled table",
   `load average before ${loadBefore.map((x) => x.toFixed(2)).join(" ")}, after ${loadavg().map((x) => x.toFixed(2)).join(" ")}; whole bench ${((Date.now() - started) / 1000).toFixed(0)} s`,
 ];

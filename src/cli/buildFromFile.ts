@@ -1,6 +1,7 @@
-import { buildCover, featureWeights, readingRecord, defaultRadius, type CoverParams, type CoverResult, type FileFingerprint, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
+import { buildCoverOnThreads, featureWeights, readingRecord, defaultRadius, type CoverParams, type CoverResult, type FileFingerprint, type ReadingRecord, type ReadOutcome } from "../core/index.ts";
 import { resolveFeatures, type CommonOptions } from "./commonOptions.ts";
 import type { BuildCommand } from "./parseBuildArgs.ts";
+import { nodePartRunner } from "./nodePartRunner.ts";
 import { readInput } from "./readInput.ts";
 import { checkRecipeInput, needsFingerprint } from "./recipeOfRun.ts";
 
@@ -16,7 +17,7 @@ export interface FileBuild extends ReadOutcome {
   readonly elapsed: number;
 }
 
-/** Reads a file through the core reader and builds the cover graph with the command's options, as `shoal build` does (`explain` too). */
+/** Reads a file through the core reader and builds the cover graph with the command's options, on two threads where there are two cores, as `shoal build` does (`explain` too). */
 export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, "input" | "radius" | "read">): Promise<FileBuild> {
   const { table, report, fileName, fileSize, fingerprint } = await readInput(command.input, command.read, needsFingerprint(command.recipe));
   checkRecipeInput(command.recipe, fileName, fingerprint);
@@ -34,7 +35,14 @@ export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, 
   // the same key order as the workbench's parameters, so both summaries read alike
   const params: CoverParams = { features, scale, metric, radius, landmarks, seed, missing, weights, ...encoded };
   const started = performance.now();
-  const result = buildCover(table, params, { now: () => performance.now() });
+  // two threads where the machine has two cores (nodePartRunner): the same result as one
+  const runner = nodePartRunner();
+  let result: CoverResult;
+  try {
+    result = await buildCoverOnThreads(table, params, runner, { now: () => performance.now() });
+  } finally {
+    runner?.close();
+  }
   const elapsed = performance.now() - started;
   const reading = readingRecord(report.format, command.read.ragged);
   return { table, report, fileName, fileSize, radius, result, reading, fingerprint, elapsed };

@@ -46,11 +46,15 @@ export { visitOrder } from "./landmark/visitOrder.ts";
 export { netWithBalls, landmarkBalls, type Balls, type NetWithBallsOptions } from "./landmark/netWithBalls.ts";
 export { rowsToNodes, transposeLists, type CompressedLists } from "./lists/compressedLists.ts";
 export { ballMembership } from "./search/ballMembership.ts";
-export { overlapEdges, type EdgeList } from "./nerve/overlapEdges.ts";
+export { overlapEdges, overlapEdgesPart, type EdgeList } from "./nerve/overlapEdges.ts";
+export { edgeCuts, joinEdgeLists } from "./nerve/edgeParts.ts";
 export { components, type Components } from "./nerve/components.ts";
 export { nerveTriangles } from "./nerve/nerveTriangles.ts";
 export { nerveBetti, type NerveBetti } from "./nerve/nerveBetti.ts";
-export { buildCover, type BuildOptions, type BuildPhase, type CoverResult } from "./cover/buildCover.ts";
+export { buildCover, coverSteps, type CoverSteps, type PartRequest, type BuildOptions, type BuildPhase, type CoverResult } from "./cover/buildCover.ts";
+export { buildCoverOnThreads } from "./cover/buildCoverOnThreads.ts";
+export { answerPart, answerTransferables, runCoverPart, type CoverTask, type PartAnswer, type PartMessage, type PartOutput, type PartRange } from "./cover/coverParts.ts";
+export { createPartRunner, type HelperThread, type PartRunner, type PartRunnerOptions } from "./cover/partRunner.ts";
 export {
   landmarkRules,
   scaleNames,
@@ -105,6 +109,7 @@ export { ballRows } from "./search/ballRows.ts";
 export { greedyBalls, type GreedyBallsOptions, type NetWithBalls } from "./landmark/greedyBalls.ts";
 export { maximinBalls, type MaximinBallsOptions } from "./landmark/maximinBalls.ts";
 export { blockMembership } from "./search/blockMembership.ts";
+export { indexFromParts, indexParts, type IndexParts, type ShareArray } from "./search/indexParts.ts";
 export { ksStatistic } from "./stats/ksStatistic.ts";
 export { ksPValue } from "./stats/ksPValue.ts";
 export { benjaminiHochberg } from "./stats/benjaminiHochberg.ts";

@@ -1,5 +1,6 @@
 import {
   buildCover,
+  buildCoverOnThreads,
   Cancelled,
   createFingerprint,
   countCandidateSets,
@@ -17,6 +18,7 @@ import {
   type ByteSource,
   type FileFingerprint,
   type ParsedTable,
+  type PartRunner,
   type ReadOutcome,
   zipExports,
 } from "../core/index.ts";
@@ -34,6 +36,8 @@ export interface HandlerOptions {
   readonly progressInterval?: number;
   /** Places a loaded table where other threads can see it without a copy (SharedArrayBuffer), when the page allows. */
   readonly share?: (table: ParsedTable) => ParsedTable;
+  /** Helper threads for the build's split steps (browserPartRunner); none builds in this thread alone. */
+  readonly partRunner?: PartRunner | null;
 }
 
 /**
@@ -42,7 +46,7 @@ export interface HandlerOptions {
  * a callback that also checks for cancellation and stops them by throwing `Cancelled`.
  * Errors become a `failed` answer, cancellations a `cancelled` one.
  */
-export function createHandler({ now = Date.now, isStopped = () => false, progressInterval = 50, share = (t) => t }: HandlerOptions = {}): Handler {
+export function createHandler({ now = Date.now, isStopped = () => false, progressInterval = 50, share = (t) => t, partRunner = null }: HandlerOptions = {}): Handler {
   let table: ParsedTable | null = null;
   let nodeStatistics: ReturnType<typeof createNodeStatistics> | null = null; // whole-column summaries of `table`, kept
   const loaded = (): ParsedTable => {
@@ -97,7 +101,12 @@ export function createHandler({ now = Date.now, isStopped = () => false, progres
         case "build": {
           let phase: Progress["phase"] = "scale";
           const onPhase = (next: Progress["phase"]): void => void (phase = next);
-          return { id: request.id, type: "built", result: buildCover(loaded(), request.params, { onPhase, onProgress: (fraction) => progress(phase, fraction), shouldStop: () => isStopped(request), now }) };
+          const options = { onPhase, onProgress: (fraction: number) => progress(phase, fraction), shouldStop: () => isStopped(request), now };
+          // one thread answers at once, as before; helpers make the answer wait for them
+          if (!partRunner) return { id: request.id, type: "built", result: buildCover(loaded(), request.params, options) };
+          return buildCoverOnThreads(loaded(), request.params, partRunner, options)
+            .then((result): Answer => ({ id: request.id, type: "built", result }))
+            .catch((error: unknown) => failure(request.id, error));
         }
         case "sweep": {
           const { radiusMin, radiusMax, steps, current } = request.range;
@@ -190,5 +199,5 @@ export function transferables(answer: Answer): ArrayBuffer[] {
   const { result } = answer;
   const arrays = [result.usedRows, result.droppedRows, result.undefinedRows, result.landmarks, result.members.offsets, result.members.items,
     result.edges.source, result.edges.target, result.edges.shared, result.component];
-  return [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))];
+  return [...new Set(arrays.map((a) => a.buffer))].filter((b): b is ArrayBuffer => b instanceof ArrayBuffer); // a shared one is copied
 }

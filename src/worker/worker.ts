@@ -1,11 +1,12 @@
 /// <reference lib="webworker" />
 import { createHandler, failure, flagsStopper, transferables } from "./handle.ts";
 import { shareTable } from "./shareTable.ts";
+import { browserPartRunner } from "./browserPartRunner.ts";
 import type { Answer, Request, Setup } from "./protocol.ts";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 let isStopped: (request: Request) => boolean = () => false;
-const handle = createHandler({ now: () => performance.now(), isStopped: (request) => isStopped(request), share: shareTable });
+const handle = createHandler({ now: () => performance.now(), isStopped: (request) => isStopped(request), share: shareTable, partRunner: browserPartRunner() });
 let queue: Promise<void> = Promise.resolve();
 
 async function answer(request: Request): Promise<void> {

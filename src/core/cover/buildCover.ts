@@ -1,10 +1,11 @@
 import { rowsToNodes, type CompressedLists } from "../lists/compressedLists.ts";
-import { blockMembershipInto } from "../search/blockMembership.ts";
 import { createListBuilder, transposeBuilt, type ListBuilder } from "../lists/listBuilder.ts";
 import { treeOrderIndex } from "../search/treeOrderIndex.ts";
 import { components } from "../nerve/components.ts";
-import { overlapEdges } from "../nerve/overlapEdges.ts";
 import { Cancelled, lapClock, type PhasedControl, type RunControl } from "../control.ts";
+import type { ShareArray } from "../search/indexParts.ts";
+import { runCoverPart, type PartOutput } from "./coverParts.ts";
+import { ballsInParts, countEdges, isShared, type PartRequest, type Split } from "./splitSteps.ts";
 import { maybeMetric } from "../metric/metrics.ts";
 import type { Metric } from "../metric/types.ts";
 import { greedyBalls } from "../landmark/greedyBalls.ts";
@@ -16,6 +17,8 @@ import type { CoverGraph } from "./coverGraph.ts";
 import { prepareFeatures, type PreparedFeatures } from "../scale/prepareFeatures.ts";
 import { maybeLandmarkRule, maybeMissingPolicy, maybeScale, type CoverParams, type LandmarkRule } from "../params.ts";
 import { nerveLoops, type LoopCounts } from "../nerve/nerveLoops.ts";
+
+export type { PartRequest };
 
 export type BuildPhase = "scale" | "landmarks" | "members" | "edges" | "components" | "loops";
 
@@ -39,7 +42,19 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
   now?: () => number;
   /** Compute triangles and b1 (default true). */
   loops?: boolean;
+  /**
+   * Split the balls found after the net and the edge count into this many parts (default 1).
+   * buildCover runs them one after another in this thread; buildCoverOnThreads gives its runner's
+   * thread count. The result is the same whatever the count.
+   */
+  parts?: number;
+  /** Least work (landmarks × rows for the balls, row pairs for the edges) worth splitting (default 2²², about 10 ms of either). */
+  minPartWork?: number;
 }
+
+/** The build as steps: it yields each split step's request and is resumed with the remote parts' outputs, in order. */
+export type CoverSteps = Generator<PartRequest, CoverResult, PartOutput[]>;
+
 
 /**
  * Builds the ball-cover graph: select rows (missing-value policy), scale and weight, leave out
@@ -50,7 +65,9 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
  * One candidate index (search/rowIndex.ts) serves the net and the balls; it only skips pairs the
  * reference predicate provably rejects. Where it prunes well, each landmark's ball is found when
  * the landmark is placed (search/greedyBalls.ts, search/maximinBalls.ts) and the "members" phase
- * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time.
+ * only transposes; otherwise the balls are found afterwards, 64 landmarks at a time. With
+ * `parts` above 1 those balls and the edge count run in ranges (splitSteps.ts), joined in order:
+ * the same lists as one part.
  * Memory: the scaled rows are the build's one copy of the table; greedy and random nets index
  * them in tree order in place (search/treeOrderIndex.ts), keep the balls packed as varint gaps
  * (search/packedLists.ts), and reuse the rows' buffer for the row → nodes lists once the index
@@ -58,7 +75,23 @@ export interface BuildOptions extends PhasedControl<BuildPhase> {
  * Cost: O(n·L·d) at worst for n rows, L landmarks, d features, plus the loops step.
  */
 export function buildCover(parsed: ParsedTable, params: CoverParams, options: BuildOptions = {}): CoverResult {
-  const { onProgress, now = Date.now, loops = true } = options;
+  const steps = coverSteps(parsed, params, options, null);
+  for (let next = steps.next(); ; ) {
+    if (next.done) return next.value;
+    const { task, remote, local } = next.value;
+    local();
+    next = steps.next(remote.map((range) => runCoverPart(task, range, options)));
+  }
+}
+
+/**
+ * buildCover as steps (see CoverSteps): buildCover drives them in one thread, buildCoverOnThreads
+ * on several. `share` copies the arrays a split step sends to other threads into shared memory.
+ */
+export function* coverSteps(parsed: ParsedTable, params: CoverParams, options: BuildOptions, share: ShareArray | null): CoverSteps {
+  const { onProgress, now = Date.now, loops = true, parts = 1, minPartWork = 1 << 22 } = options;
+  if (!(Number.isInteger(parts) && parts >= 1)) throw new Error(`invalid part count: ${parts}`);
+  const split: Split = { parts, minWork: minPartWork, share };
   const enter = (phase: BuildPhase): void => {
     options.onPhase?.(phase);
     onProgress?.(0);
@@ -72,7 +105,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
 
   const lap = lapClock(now);
   enter("scale");
-  const found = landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap });
+  const found = yield* landmarksAndBalls(parsed, params, { ...options, enter, metric, rule, lap, split });
   const { centers, prepared, scaleTime, landmarkTime } = found;
   // row → nodes; and node → rows ascending: the lists as found when they hold rows, else the
   // transpose back, made after the lists by tree position are let go
@@ -83,7 +116,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
   const memberTime = lap();
 
   enter("edges");
-  const edges = overlapEdges(rowNodes, centers.length, local);
+  const edges = yield* countEdges(rowNodes, centers.length, local, split);
   const edgeTime = lap();
 
   const { component, count } = components(centers.length, edges.source, edges.target);
@@ -120,7 +153,7 @@ export function buildCover(parsed: ParsedTable, params: CoverParams, options: Bu
 /** Each landmark's ball: lists of rows, or lists of tree positions (row rowAt[p]) as found, packed (search/packedLists.ts). */
 type FoundBalls =
   | { readonly kind: "rows"; readonly lists: CompressedLists }
-  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBuffer | null };
+  | { readonly kind: "positions"; readonly lists: ListBuilder; readonly rowAt: Uint32Array; readonly spare: ArrayBufferLike | null };
 
 /** What a build has settled before it reads the rows: the metric, the rule, its clock and its hooks. */
 interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
@@ -130,6 +163,7 @@ interface BuildRun extends Pick<BuildOptions, "onProgress" | "shouldStop"> {
   readonly rule: LandmarkRule;
   /** Milliseconds since the last lap. */
   readonly lap: () => number;
+  readonly split: Split;
 }
 
 interface FoundNet {
@@ -150,8 +184,8 @@ interface FoundNet {
  * numbers, because its ties go to the lowest row. Laps the clock after scaling and after the net;
  * the caller times the balls, which it turns into lists by row.
  */
-function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): FoundNet {
-  const { metric, rule, lap, enter, onProgress, shouldStop } = run;
+function* landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildRun): Generator<PartRequest, FoundNet, PartOutput[]> {
+  const { metric, rule, lap, enter, onProgress, shouldStop, split } = run;
   const step = (): void => {
     if (shouldStop?.()) throw new Cancelled("the build");
   };
@@ -172,18 +206,20 @@ function landmarksAndBalls(parsed: ParsedTable, params: CoverParams, run: BuildR
     const net = greedyBalls(index, params.radius, atTreePositions(visitOrder(rule, params.seed, n), rowAt), { ...control, into: lists });
     const landmarkTime = lap();
     enter("members");
+    let searched = index;
     if (lists.offsets.length - 1 === net.landmarks.length) {
       // balls found with the net: the same reports as ballMembership's, after every 64 landmarks
       for (let k = 64; k <= net.landmarks.length; k += 64) membersProgress(k, net.landmarks.length);
     } else {
       lists = createListBuilder(n, { packed: true });
-      blockMembershipInto(lists, index, params.radius, net.landmarks, control);
+      searched = yield* ballsInParts(lists, index, params.radius, net.landmarks, control, split);
     }
     const centers = net.landmarks.map((p) => rowAt[p]!);
     // the scaled rows (in tree order) are not read again: their buffer can hold the row → nodes
-    // lists, when it is the build's own whole buffer (prepareFeatures makes it so; checked anyway)
-    const { buffer, byteOffset } = table.values;
-    const spare = buffer instanceof ArrayBuffer && byteOffset === 0 ? buffer : null;
+    // lists, when it is the build's own whole buffer (prepareFeatures makes it so, and so does
+    // sharing it; checked anyway). A shared buffer is no ArrayBuffer, hence the second test.
+    const { buffer, byteOffset } = searched.table.values;
+    const spare = byteOffset === 0 && (buffer instanceof ArrayBuffer || isShared(buffer)) ? buffer : null;
     return { centers, balls: { kind: "positions", lists, rowAt, spare }, prepared, scaleTime, landmarkTime };
   }
   const index = ordered?.index ?? createRowIndex(table, metric, indexOptions);
@@ -209,3 +245,4 @@ function atTreePositions(order: Uint32Array, rowAt: Uint32Array): Uint32Array {
 function rowNodesOf(balls: FoundBalls, rows: number): CompressedLists {
   return balls.kind === "rows" ? rowsToNodes(balls.lists, rows) : transposeBuilt(balls.lists, rows, balls.rowAt, balls.spare ?? undefined);
 }
+

@@ -91,6 +91,6 @@ export function finishLists(builder: ListBuilder): CompressedLists {
  * transposeLists of the builder's lists, item x standing for row rowOf[x]; packed lists are read
  * without unpacking, into `spare` when it fits (transposePacked). O(total + rows).
  */
-export function transposeBuilt(builder: ListBuilder, rows: number, rowOf: Uint32Array, spare?: ArrayBuffer): CompressedLists {
+export function transposeBuilt(builder: ListBuilder, rows: number, rowOf: Uint32Array, spare?: ArrayBufferLike): CompressedLists {
   return builder.packed ? transposePacked(builder.offsets, builder.packed, rows, rowOf, spare) : transposeLists(builder.offsets, listPieces(builder), rows, rowOf);
 }

@@ -103,7 +103,7 @@ export function unpackLists(offsets: readonly number[], store: PackedStore): Com
  * result is placed at its start when it fits and fills at least half of it, so that its memory is
  * reused instead of left for the collector. O(bytes + rows).
  */
-export function transposePacked(offsets: readonly number[], store: PackedStore, rows: number, rowOf: Uint32Array, spare?: ArrayBuffer): CompressedLists {
+export function transposePacked(offsets: readonly number[], store: PackedStore, rows: number, rowOf: Uint32Array, spare?: ArrayBufferLike): CompressedLists {
   const total = offsets[offsets.length - 1] ?? 0;
   const bytes = 4 * (rows + 1 + total);
   // reuse only a buffer the result fills at least half of: otherwise holding the rest for the

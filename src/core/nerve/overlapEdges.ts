@@ -8,7 +8,7 @@ export interface EdgeList {
   readonly shared: Uint32Array;
 }
 
-const denseLimit = 2048; // up to this many nodes, counts go to an L × L matrix (≤ 16 MB)
+export const denseLimit = 2048; // up to this many nodes, counts go to an L × L matrix (≤ 16 MB)
 
 /**
  * Edges of the nerve's 1-skeleton: nodes a < b are joined iff their balls share a row, weighted
@@ -20,19 +20,34 @@ const denseLimit = 2048; // up to this many nodes, counts go to an L × L matrix
  * @example overlapEdges(rowsToNodes({ offsets: Uint32Array.of(0, 2, 4), items: Uint32Array.of(0, 1, 1, 2) }, 3), 2) // => source [0], target [1], shared [1]
  */
 export function overlapEdges(rowNodes: CompressedLists, nodes: number, members?: CompressedLists): EdgeList {
-  if (nodes <= denseLimit) return denseEdges(rowNodes, nodes);
-  return sparseEdges(rowNodes, nodes, members ?? rowsToNodes(rowNodes, nodes));
+  return overlapEdgesPart(rowNodes, nodes, 0, nodes, members);
 }
 
-function denseEdges(rowNodes: CompressedLists, nodes: number): EdgeList {
-  const counts = new Uint32Array(nodes * nodes);
+/**
+ * The edges of overlapEdges whose lower node a lies in [from, to), in the same order: the edges of
+ * the parts of a split of 0..nodes, concatenated in order, are overlapEdges' edges (the test
+ * "range split = whole" checks it), so parts can be counted on other threads. A dense part keeps
+ * a (to − from) × L matrix. Cost: the rows' pairs whose lower node is in the range, plus the
+ * rows' lists scanned once (dense) or the range's members (sparse).
+ */
+export function overlapEdgesPart(rowNodes: CompressedLists, nodes: number, from: number, to: number, members?: CompressedLists): EdgeList {
+  if (!(0 <= from && from <= to && to <= nodes)) throw new Error(`invalid node range: ${from}..${to} of ${nodes}`);
+  if (nodes <= denseLimit) return denseEdges(rowNodes, nodes, from, to);
+  return sparseEdges(rowNodes, nodes, members ?? rowsToNodes(rowNodes, nodes), from, to);
+}
+
+function denseEdges(rowNodes: CompressedLists, nodes: number, from: number, to: number): EdgeList {
+  const counts = new Uint32Array((to - from) * nodes);
   const { offsets, items } = rowNodes;
   const rows = offsets.length - 1;
   let edges = 0;
   for (let i = 0; i < rows; ++i) {
     const end = offsets[i + 1]!;
     for (let s = offsets[i]!; s < end; ++s) {
-      const base = items[s]! * nodes;
+      const a = items[s]!;
+      if (a < from) continue;
+      if (a >= to) break;
+      const base = (a - from) * nodes;
       for (let t = s + 1; t < end; ++t) if (counts[base + items[t]!]!++ === 0) edges++;
     }
   }
@@ -40,9 +55,9 @@ function denseEdges(rowNodes: CompressedLists, nodes: number): EdgeList {
   const target = new Uint32Array(edges);
   const shared = new Uint32Array(edges);
   let e = 0;
-  for (let a = 0; a < nodes; ++a) {
+  for (let a = from; a < to; ++a) {
     for (let b = a + 1; b < nodes; ++b) {
-      const count = counts[a * nodes + b]!;
+      const count = counts[(a - from) * nodes + b]!;
       if (count === 0) continue;
       source[e] = a;
       target[e] = b;
@@ -52,14 +67,14 @@ function denseEdges(rowNodes: CompressedLists, nodes: number): EdgeList {
   return { source, target, shared };
 }
 
-function sparseEdges(rowNodes: CompressedLists, nodes: number, members: CompressedLists): EdgeList {
+function sparseEdges(rowNodes: CompressedLists, nodes: number, members: CompressedLists, from: number, to: number): EdgeList {
   const counts = new Uint32Array(nodes);
   const touched = new Uint32Array(nodes);
   const source: number[] = [];
   const target: number[] = [];
   const shared: number[] = [];
   const { offsets, items } = rowNodes;
-  for (let a = 0; a < nodes; ++a) {
+  for (let a = from; a < to; ++a) {
     let m = 0;
     for (let t = members.offsets[a]!; t < members.offsets[a + 1]!; ++t) {
       const i = members.items[t]!;

@@ -9,6 +9,7 @@ import type { Norm } from "./searchSpace.ts";
 import type { TreeQuery } from "./treeQuery.ts";
 
 const chunk = 64; // landmarks per pass: their coordinates stay in the first-level cache with a leaf's rows
+const pairsPerCheck = 1 << 16; // (landmark, row) pairs scanned between two asks of shouldStop: about a millisecond at 40 columns, where a group of 64 can take 100 ms
 
 /** State of one pass over the tree for a group of landmarks. */
 interface Pass {
@@ -27,6 +28,9 @@ interface Pass {
   size: number;
   scanned: number;
   bounded: boolean;
+  readonly control: RunControl;
+  /** Pairs scanned since shouldStop was last asked. */
+  unchecked: number;
 }
 
 /**
@@ -37,7 +41,7 @@ interface Pass {
  * one ball query per landmark (ballRows), members ascending, but a leaf's rows are read once
  * per group instead of once per landmark, which matters when rows do not fit in the cache.
  * (Grouping queries over a tree, as in A. G. Gray and A. W. Moore, NIPS 13, 2001.)
- * Reports progress after every 64 landmarks. Cost: O(n·L·d) at worst, O(m log m) for sorting.
+ * Reports progress after every 64 landmarks, and asks shouldStop after every 2¹⁶ pairs scanned too. Cost: O(n·L·d) at worst, O(m log m) for sorting.
  * @example blockMembership(createRowIndex(line0to3, euclidean), 1, Uint32Array.of(0, 2)) // => offsets [0, 2, 5], items [0, 1, 1, 2, 3]
  */
 export function blockMembership(index: RowIndex, radius: number, landmarks: Uint32Array, control: RunControl = {}): CompressedLists {
@@ -69,6 +73,8 @@ export function blockMembershipInto(builder: ListBuilder, index: RowIndex, radiu
     size: 0,
     scanned: 0,
     bounded: index.mode !== "flat",
+    control,
+    unchecked: 0,
   };
   for (let first = 0; first < landmarks.length; first += chunk) {
     const group = Math.min(chunk, landmarks.length - first);
@@ -114,6 +120,10 @@ function visit(pass: Pass, node: number, level: number, count: number): void {
   const start = tree.start[node]!;
   const end = tree.end[node]!;
   pass.scanned += kept * (end - start);
+  if ((pass.unchecked += kept * (end - start)) >= pairsPerCheck) {
+    pass.unchecked = 0;
+    checkStop(pass.control, "the balls");
+  }
   for (let t = 0; t < kept; ++t) {
     const l = pool[into + t]!;
     query.centreBase = l * d;
