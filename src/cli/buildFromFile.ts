@@ -11,11 +11,13 @@ export interface FileBuild extends ReadOutcome {
   readonly reading: ReadingRecord;
   /** Milliseconds the build took. */
   readonly elapsed: number;
+  /** Milliseconds reading the file took (open to parsed table). */
+  readonly readMs: number;
 }
 
 /** Reads a file through the core reader and builds the cover graph with the command's options, as `shoal build` does (`explain` too). */
 export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, "input" | "radius" | "read">): Promise<FileBuild> {
-  const { table, report, fileName, fileSize } = await readInput(command.input, command.read);
+  const { table, report, fileName, fileSize, readMs } = await readInput(command.input, command.read);
   const features = resolveFeatures(table, command);
   for (const name of command.outcomes) {
     if (table.columns.find((c) => c.name === name)!.kind !== "numeric") throw new Error(`not a numeric column: ${name}`);
@@ -33,5 +35,5 @@ export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, 
   const result = buildCover(table, params, { now: () => performance.now() });
   const elapsed = performance.now() - started;
   const reading = readingRecord(report.format, command.read.ragged);
-  return { table, report, fileName, fileSize, radius, result, reading, elapsed };
+  return { table, report, fileName, fileSize, radius, result, reading, elapsed, readMs };
 }

@@ -35,15 +35,16 @@ export function readByteOptions(values: { readonly [K in keyof typeof readOption
   };
 }
 
-/** Reads a table file through the core pipeline the workbench's worker uses, so both see the same table. */
-export async function readInput(path: string, options: ByteReadOptions): Promise<ReadOutcome & { fileName: string; fileSize: number }> {
+/** Reads a table file through the core pipeline the workbench's worker uses, so both see the same table; `readMs` is the time from open to table. */
+export async function readInput(path: string, options: ByteReadOptions): Promise<ReadOutcome & { fileName: string; fileSize: number; readMs: number }> {
+  const started = performance.now();
   const handle = await open(path, "r").catch(() => {
     throw new Error(`cannot read input file: ${path}`);
   });
   try {
     const { size } = await handle.stat();
     const outcome = await readTableBytes(fileSource(handle, size), options, { utf8 });
-    return { ...outcome, fileName: basename(path), fileSize: size };
+    return { ...outcome, fileName: basename(path), fileSize: size, readMs: performance.now() - started };
   } finally {
     await handle.close();
   }

@@ -1,4 +1,4 @@
-import { coverExports, scanHotspots } from "../core/index.ts";
+import { coverExportChunks, coverSummary, scanHotspots } from "../core/index.ts";
 import { buildFromFile } from "./buildFromFile.ts";
 import { hotspotFileTexts } from "./hotspotSummary.ts";
 import type { HotspotCommand } from "./parseHotspotArgs.ts";
@@ -11,12 +11,13 @@ import { writeFileSet } from "./writeFileSet.ts";
  */
 export async function runHotspots(command: HotspotCommand): Promise<string> {
   const built = await buildFromFile(command);
-  const { table, fileName, fileSize, radius, result, reading, elapsed } = built;
+  const { table, fileName, fileSize, radius, result, reading, elapsed, readMs } = built;
   const column = table.columns.find((c) => c.name === command.scan);
   if (!column) throw new Error(`unknown column: ${command.scan}`);
   if (column.kind !== "numeric") throw new Error(`not a numeric column: ${command.scan}`);
-  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading });
-  const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
+  const context = { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading };
+  const files = coverExportChunks(table, result, context);
+  const summary = { ...coverSummary(result, context), timingsMs: { read: readMs, ...result.timings, total: elapsed } };
   const started = performance.now();
   const scan = scanHotspots(table, result, {
     outcome: command.scan,
@@ -30,9 +31,9 @@ export async function runHotspots(command: HotspotCommand): Promise<string> {
   });
   const scanTime = performance.now() - started;
   await writeFileSet(command.outDir, {
-    "nodes.csv": files["nodes.csv"],
-    "members.csv": files["members.csv"],
-    "edges.csv": files["edges.csv"],
+    "nodes.csv": files["nodes.csv"](),
+    "members.csv": files["members.csv"](),
+    "edges.csv": files["edges.csv"](),
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
     ...hotspotFileTexts(scan, table, { command, fileName, radius, buildMs: elapsed, scanMs: scanTime }),
   });

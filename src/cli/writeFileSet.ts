@@ -4,10 +4,17 @@ import { join } from "node:path";
 /** The list of the files Shoal wrote into an output folder, one name a line; only these are ever replaced or removed. */
 export const manifestName = ".shoal-files";
 
+/**
+ * A file's text: one string for a small file, or its pieces in order (a generator such as
+ * `coverExportChunks` gives), which are written as they come and never joined into one string.
+ */
+export type FileText = string | Iterable<string>;
+
 /** The file-system steps of a swap, injectable so a test can make one fail midway. */
 export interface FileSteps {
   readonly rename: (from: string, to: string) => Promise<void>;
-  readonly writeFile: (path: string, text: string) => Promise<void>;
+  /** Node's writeFile takes an iterable too: it writes each piece, awaiting each write (backpressure), so memory holds one piece at a time. */
+  readonly writeFile: (path: string, text: FileText) => Promise<void>;
 }
 
 const nodeSteps: FileSteps = { rename, writeFile };
@@ -23,7 +30,7 @@ const nodeSteps: FileSteps = { rename, writeFile };
  * A failure in steps 2–3 removes what was moved in and moves the backup back, then throws.
  * Files not named in a manifest are never touched. Every move is a rename within one folder's file system.
  */
-export async function writeFileSet(outDir: string, files: Readonly<Record<string, string>>, steps: FileSteps = nodeSteps): Promise<void> {
+export async function writeFileSet(outDir: string, files: Readonly<Record<string, FileText>>, steps: FileSteps = nodeSteps): Promise<void> {
   const existing = await stat(outDir).catch(() => null);
   if (existing && !existing.isDirectory()) throw new Error(`output path is not a folder: ${outDir}`);
   const names = Object.keys(files);

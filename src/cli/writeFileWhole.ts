@@ -1,11 +1,13 @@
 import { rename, rm, writeFile } from "node:fs/promises";
+import type { FileText } from "./writeFileSet.ts";
 
 /**
  * Writes one output file whole or not at all: the text goes to a staging file beside it, which is
  * renamed over the target only once complete (a rename within one folder replaces atomically on
  * POSIX file systems), so a reader never sees half a file and a failure leaves the old one.
+ * Pieces of text are written as they come (see `FileText`).
  */
-export async function writeFileWhole(path: string, text: string): Promise<void> {
+export async function writeFileWhole(path: string, text: FileText): Promise<void> {
   const staging = `${path}.partial-${process.pid}`;
   try {
     await writeFile(staging, text);
