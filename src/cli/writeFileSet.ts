@@ -1,23 +1,23 @@
-import { mkdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { mkdir, readFile, rename, rm, stat } from "node:fs/promises";
 import { join } from "node:path";
+import { writeTextFile } from "./writeTextFile.ts";
 
 /** The list of the files Shoal wrote into an output folder, one name a line; only these are ever replaced or removed. */
 export const manifestName = ".shoal-files";
 
 /**
- * A file's text: one string for a small file, or its pieces in order (a generator such as
- * `coverExportChunks` gives), which are written as they come and never joined into one string.
+ * A file's text: one string for a small file, or its pieces in order (strings, or bytes of UTF-8
+ * text, as the generators of `coverExportChunks` give), written as they come and never joined into one string.
  */
-export type FileText = string | Iterable<string>;
+export type FileText = string | Iterable<string | Uint8Array>;
 
 /** The file-system steps of a swap, injectable so a test can make one fail midway. */
 export interface FileSteps {
   readonly rename: (from: string, to: string) => Promise<void>;
-  /** Node's writeFile takes an iterable too: it writes each piece, awaiting each write (backpressure), so memory holds one piece at a time. */
   readonly writeFile: (path: string, text: FileText) => Promise<void>;
 }
 
-const nodeSteps: FileSteps = { rename, writeFile };
+const nodeSteps: FileSteps = { rename, writeFile: writeTextFile };
 
 /**
  * Replaces the set of Shoal's files in `outDir` as a whole, so that after any failure the folder

@@ -2,6 +2,7 @@ import type { CoverResult } from "../cover/buildCover.ts";
 import { nodeMeans } from "../cover/nodeMeans.ts";
 import { cellText } from "../table/cellText.ts";
 import type { ParsedTable } from "../table/types.ts";
+import { asciiLines } from "./asciiLines.ts";
 import { csvLine, csvNumber, csvQuoted, csvText } from "./csvCell.ts";
 
 /** The columns the tables name beside the features (a part of `ExportContext`). */
@@ -12,11 +13,14 @@ export interface ExportColumns {
   readonly outcomes: readonly string[];
 }
 
-/** The three export tables as pieces of text, each produced on demand and in order, whose concatenation is the file. */
+/** A piece of a file: text, or bytes of ASCII text (digits, commas, line ends) from `asciiLines`. */
+export type ExportPiece = string | Uint8Array;
+
+/** The three export tables as pieces, each produced on demand and in order, whose concatenation is the file. */
 export interface CoverExportChunks {
-  readonly "nodes.csv": () => Iterable<string>;
-  readonly "members.csv": () => Iterable<string>;
-  readonly "edges.csv": () => Iterable<string>;
+  readonly "nodes.csv": () => Iterable<ExportPiece>;
+  readonly "members.csv": () => Iterable<ExportPiece>;
+  readonly "edges.csv": () => Iterable<ExportPiece>;
 }
 
 /** Characters gathered before a piece is handed out: large enough that a writer makes few calls, small beside any file worth streaming. */
@@ -25,8 +29,9 @@ export const exportChunkLength = 1 << 16; // our choice, no source
 /**
  * nodes.csv, members.csv and edges.csv of `coverExports`, byte for byte, as generators of pieces of
  * about `exportChunkLength` characters, so a writer can stream a file of any size without holding
- * it as one string (a JavaScript string holds at most about 2^29 characters in V8). The node means
- * and the id column are resolved at once (an unknown column throws here, before anything is
+ * it as one string (a JavaScript string holds at most about 2^29 characters in V8). Lines of
+ * integers only (members.csv without an id column, edges.csv) come as ASCII bytes (`asciiLines`),
+ * the others as strings; `piecesText` joins either kind. The node means and the id column are resolved at once (an unknown column throws here, before anything is
  * written); the lines are made only as the pieces are taken. Each call of a file's function
  * starts that file again. O(nodes · columns + memberships + edges) per file read.
  */
@@ -52,11 +57,21 @@ export function coverExportChunks(parsed: ParsedTable, result: CoverResult, cont
     },
     *"members.csv"() {
       let text = csvLine(["node", "row", ...(context.idColumn === null ? [] : [csvText(context.idColumn)])]);
+      if (!ids) {
+        yield text;
+        let k = 0;
+        yield* asciiLines(items.length, 2, exportChunkLength, (t, cells) => {
+          while (t >= offsets[k + 1]!) ++k;
+          cells[0] = k + 1;
+          cells[1] = items[t]! + 1;
+        });
+        return;
+      }
       for (let k = 0; k < nodes; ++k) {
         const node = String(k + 1);
         for (let t = offsets[k]!; t < offsets[k + 1]!; ++t) {
           const row = items[t]!;
-          text += ids ? `${node},${row + 1},${ids(row)}\n` : `${node},${row + 1}\n`;
+          text += `${node},${row + 1},${ids(row)}\n`;
           if (text.length >= exportChunkLength) {
             yield text;
             text = "";
@@ -66,17 +81,24 @@ export function coverExportChunks(parsed: ParsedTable, result: CoverResult, cont
       yield text;
     },
     *"edges.csv"() {
-      let text = csvLine(["source", "target", "shared"]);
-      for (let e = 0; e < source.length; ++e) {
-        text += `${source[e]! + 1},${target[e]! + 1},${shared[e]!}\n`;
-        if (text.length >= exportChunkLength) {
-          yield text;
-          text = "";
-        }
-      }
-      yield text;
+      yield csvLine(["source", "target", "shared"]);
+      yield* asciiLines(source.length, 3, exportChunkLength, (e, cells) => {
+        cells[0] = source[e]! + 1;
+        cells[1] = target[e]! + 1;
+        cells[2] = shared[e]!;
+      });
     },
   };
+}
+
+/** The text of a file's pieces (bytes from `asciiLines` are ASCII, one character per byte). */
+export function piecesText(pieces: Iterable<ExportPiece>): string {
+  let text = "";
+  for (const piece of pieces) {
+    if (typeof piece === "string") text += piece;
+    else for (let i = 0; i < piece.length; i += 8192) text += String.fromCharCode(...piece.subarray(i, i + 8192));
+  }
+  return text;
 }
 
 function columnNumbers(parsed: ParsedTable, name: string): Float64Array {

@@ -1,7 +1,7 @@
 import type { CoverResult } from "../cover/buildCover.ts";
 import type { DecimalMark, DelimiterName, RaggedPolicy } from "../table/readOptions.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { coverExportChunks, type ExportColumns } from "./coverExportChunks.ts";
+import { coverExportChunks, piecesText, type ExportColumns } from "./coverExportChunks.ts";
 import type { Region } from "./regionRowsCsv.ts";
 
 /**
@@ -40,9 +40,9 @@ export interface CoverExports {
 export function coverExports(parsed: ParsedTable, result: CoverResult, context: ExportContext): CoverExports {
   const chunks = coverExportChunks(parsed, result, context);
   return {
-    "nodes.csv": [...chunks["nodes.csv"]()].join(""),
-    "members.csv": [...chunks["members.csv"]()].join(""),
-    "edges.csv": [...chunks["edges.csv"]()].join(""),
+    "nodes.csv": piecesText(chunks["nodes.csv"]()),
+    "members.csv": piecesText(chunks["members.csv"]()),
+    "edges.csv": piecesText(chunks["edges.csv"]()),
     "summary.json": `${JSON.stringify(coverSummary(result, context), null, 2)}\n`,
   };
 }
