@@ -35,6 +35,13 @@ export function readByteOptions(values: { readonly [K in keyof typeof readOption
   };
 }
 
+/**
+ * The headless command's file-size limit: none. The workbench stops at 1 GiB (`maxInputBytes`),
+ * a browser tab's memory; here the table only has to fit in the machine's memory (8 bytes per
+ * numeric cell, plus the texts of text columns). Parquet files, read whole, keep the 1 GiB limit.
+ */
+export const headlessInputBytes = Number.POSITIVE_INFINITY;
+
 /** Reads a table file through the core pipeline the workbench's worker uses, so both see the same table; `readMs` is the time from open to table. */
 export async function readInput(path: string, options: ByteReadOptions): Promise<ReadOutcome & { fileName: string; fileSize: number; readMs: number }> {
   const started = performance.now();
@@ -43,7 +50,7 @@ export async function readInput(path: string, options: ByteReadOptions): Promise
   });
   try {
     const { size } = await handle.stat();
-    const outcome = await readTableBytes(fileSource(handle, size), options, { utf8 });
+    const outcome = await readTableBytes(fileSource(handle, size), options, { utf8, maxBytes: headlessInputBytes });
     return { ...outcome, fileName: basename(path), fileSize: size, readMs: performance.now() - started };
   } finally {
     await handle.close();

@@ -22,13 +22,14 @@ export interface TableReader {
  * decimal mark (unless given) and to reject binary input; after that the records stream into
  * per-column builders (`ColumnBuilder`), so the text is never held whole.
  * Row k of the table is data record k (1-based numbering outside, 0-based inside).
+ * Text past `maxCharacters` (default `maxInputBytes`) is refused.
  * Cost: O(text length); memory: 8 bytes per numeric cell plus the texts of text columns.
  * @example
  * const reader = createTableReader();
  * reader.push("x;y\n1,5;2\n");
  * reader.finish().table.columns[0]!.numbers // => Float64Array [1.5]
  */
-export function createTableReader(options: ReadOptions = {}): TableReader {
+export function createTableReader(options: ReadOptions = {}, maxCharacters: number = maxInputBytes): TableReader {
   const delimiterOption = options.delimiter === undefined ? undefined : maybeDelimiter(options.delimiter);
   const decimalOption = options.decimal === undefined ? undefined : maybeDecimalMark(options.decimal);
   const ragged = maybeRaggedPolicy(options.ragged ?? "reject");
@@ -76,7 +77,7 @@ export function createTableReader(options: ReadOptions = {}): TableReader {
       if (outcome) throw new Error("cannot push text after finish");
       guard(() => {
         characters += text.length;
-        if (characters > maxInputBytes) throw new Error(`the file is too large: more than ${maxInputBytes} characters (the limit is 1 GiB)`);
+        if (characters > maxCharacters) throw new Error(`the file is too large: more than ${maxCharacters} characters (the limit is ${maxCharacters / 2 ** 30} GiB)`);
         feed(ends.push(text));
       });
     },

@@ -29,6 +29,8 @@ export interface ByteReadControl {
   readonly onProgress?: (fraction: number, rows: number) => void;
   readonly shouldStop?: () => boolean;
   readonly chunkBytes?: number;
+  /** Largest file read, in bytes (default `maxInputBytes`, 1 GiB; the headless command passes Infinity). Parquet, read whole, keeps 1 GiB. */
+  readonly maxBytes?: number;
 }
 
 export const readChunkBytes = 1 << 22; // 4 MiB per step: progress and cancellation every few tens of milliseconds
@@ -42,7 +44,7 @@ export const readChunkBytes = 1 << 22; // 4 MiB per step: progress and cancellat
  */
 export async function readTableBytes(source: ByteSource, options: ByteReadOptions, control: ByteReadControl): Promise<ReadOutcome> {
   const { size } = source;
-  checkInputSize(size);
+  checkInputSize(size, control.maxBytes);
   if (size === 0) throw new Error("the file is empty");
   const stop = (): void => {
     if (control.shouldStop?.()) throw new Cancelled("reading the file");
@@ -56,7 +58,7 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
   const encoding = options.encoding ?? detected.encoding;
   const decode: Utf8Decoder = encoding === "utf-8" ? control.utf8() : (bytes) => decodeWindows1252(bytes);
   const { encoding: _chosen, ...readOptions } = options;
-  const reader = createTableReader(readOptions);
+  const reader = createTableReader(readOptions, control.maxBytes);
   const step = control.chunkBytes ?? readChunkBytes;
   for (let start = detected.bomLength; start < size; start += step) {
     stop();
