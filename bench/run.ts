@@ -3,7 +3,8 @@
 // tests. Each radius is calibrated so that the greedy file-order net has 1,000 ± 10 % landmarks.
 // On the 10,000-row cases the plain computation (bench/plainCover.ts) is timed too and checked
 // to give identical landmarks, balls and edges. --quick (or SHOAL_BENCH_QUICK=1) runs those only.
-// Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON).
+// Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON), and
+// the whole command as a process (bench/wholeProcess.ts; --ten-million adds 10,000,000 × 8).
 import { mkdir, writeFile } from "node:fs/promises";
 import { cpus, loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
@@ -116,3 +117,7 @@ await writeFile(new URL("./results/latest.json", import.meta.url), `${JSON.strin
 
 console.log("");
 await import("./sweep.ts"); // prints the sweep table, writes bench/results/sweep.json
+
+console.log("");
+const { wholeProcess } = await import("./wholeProcess.ts");
+await wholeProcess({ tenMillion: process.argv.includes("--ten-million") || process.env.SHOAL_BENCH_TEN_MILLION === "1" });

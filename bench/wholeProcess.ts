@@ -8,12 +8,14 @@
 import { execFileSync, spawn } from "node:child_process";
 import { once } from "node:events";
 import { createWriteStream } from "node:fs";
-import { mkdtemp, readFile, rm, stat } from "node:fs/promises";
-import { tmpdir } from "node:os";
+import { mkdir, mkdtemp, readFile, rm, stat, writeFile } from "node:fs/promises";
+import { loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import { fileURLToPath } from "node:url";
-import { randomSource } from "../src/core/index.ts";
+import { readInput } from "../src/cli/readInput.ts";
+import { writeFileSet } from "../src/cli/writeFileSet.ts";
+import { buildCover, coverExportChunks, coverSummary, randomSource } from "../src/core/index.ts";
 
 const bin = fileURLToPath(new URL("../bin/shoal.mjs", import.meta.url));
 
@@ -30,7 +32,7 @@ export const wholeCases: readonly WholeCase[] = [
   { rows: 100_000, dims: 16, radius: 3.81, runs: 5 }, // 1,2xx landmarks: bench/calibrateRadius.ts on this seeded table (target 1,200 ± 2 %), rounded to 3 digits
   { rows: 100_000, dims: 4, radius: 0.486, runs: 5 }, // 2,0xx landmarks: the same, target 2,000 ± 2 %
 ];
-export const tenMillionCase: WholeCase = { rows: 10_000_000, dims: 8, radius: 2.5, runs: 1 };
+export const tenMillionCase: WholeCase = { rows: 10_000_000, dims: 8, radius: 1.87, runs: 1 }; // 1,032 landmarks on the first 200,000 rows (calibrateRadius, target 1,000 ± 5 %)
 
 /** Writes rows × dims uniform numbers in [0, 1) (xoshiro128**, seed = dims) with 17 significant digits, header x1..xd, streamed. */
 export async function writeUniformCsv(path: string, rows: number, dims: number): Promise<number> {
@@ -91,6 +93,37 @@ export function startUp(): { node: number; help: number } {
 
 const ms = (x: number): string => x.toFixed(0);
 
+/**
+ * The writing alone, in this process: the table read and built as the command does (without the
+ * loops, which the files do not need), then, `runs` times, the node means computed
+ * (coverExportChunks resolves them before any line) and the four files made and written through
+ * writeFileSet. Returns the output bytes, and the median milliseconds of the means and of the
+ * writing (wall clock and CPU time of this process).
+ */
+export async function writeSpeed(input: string, radius: number, folder: string, runs: number): Promise<{ bytes: number; meansMs: number; wallMs: number; cpuMs: number }> {
+  const { table } = await readInput(input, {});
+  const features = table.columns.map((c) => c.name);
+  const result = buildCover(table, { features, scale: "zscore", metric: "euclidean", radius, landmarks: "greedy-file-order", seed: 1 }, { loops: false });
+  const context = { fileName: "t.csv", fileSize: 0, idColumn: null, outcomes: [] };
+  const means: number[] = [];
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  for (let r = 0; r < runs; ++r) {
+    const meansStarted = performance.now();
+    const files = coverExportChunks(table, result, context);
+    means.push(performance.now() - meansStarted);
+    const usage = process.cpuUsage();
+    const started = performance.now();
+    await writeFileSet(folder, { "nodes.csv": files["nodes.csv"](), "members.csv": files["members.csv"](), "edges.csv": files["edges.csv"](), "summary.json": `${JSON.stringify(coverSummary(result, context), null, 2)}\n` });
+    wall.push(performance.now() - started);
+    const used = process.cpuUsage(usage);
+    cpu.push((used.user + used.system) / 1000);
+  }
+  const sizes = await Promise.all(["nodes.csv", "members.csv", "edges.csv", "summary.json"].map((name) => stat(join(folder, name))));
+  await rm(folder, { recursive: true, force: true });
+  return { bytes: sizes.reduce((sum, s) => sum + s.size, 0), meansMs: median(means), wallMs: median(wall), cpuMs: median(cpu) };
+}
+
 /** Runs the cases and prints the "whole process" table; returns its rows. */
 export async function wholeProcess(options: { tenMillion: boolean }): Promise<Record<string, string>[]> {
   const folder = await mkdtemp(join(tmpdir(), "shoal-whole-"));
@@ -119,6 +152,8 @@ export async function wholeProcess(options: { tenMillion: boolean }): Promise<Re
       const tableBytes = c.rows * c.dims * 8;
       const listBytes = summary.memberships * 4 + (summary.nodes + 1) * 4;
       const peak = Math.max(...runs.map((r) => r.run.peakKiB)) * 1024;
+      const speed = c.rows <= 1_000_000 ? await writeSpeed(input, c.radius, join(folder, "write"), 5) : null;
+      const rate = (bytes: number, msTaken: number): string => (bytes / 1e3 / msTaken).toFixed(0);
       rows.push({
         case: `uniform ${c.rows.toLocaleString("en")} × ${c.dims}`,
         radius: String(c.radius),
@@ -136,6 +171,9 @@ export async function wholeProcess(options: { tenMillion: boolean }): Promise<Re
         "build ms": ms(build),
         "write+rest ms": ms(rest),
         "out MB": (outBytes / 1e6).toFixed(1),
+        "means ms": speed ? ms(speed.meansMs) : "",
+        "write MB/s wall": speed ? rate(speed.bytes, speed.wallMs) : "",
+        "write MB/s cpu": speed ? rate(speed.bytes, speed.cpuMs) : "",
         "total ms": ms(total),
         "peak RSS MiB": (peak / 2 ** 20).toFixed(0),
         "peak / (3·table + lists)": (peak / (3 * tableBytes + listBytes)).toFixed(2),
@@ -149,6 +187,8 @@ export async function wholeProcess(options: { tenMillion: boolean }): Promise<Re
     await rm(folder, { recursive: true, force: true });
   }
   printTable(rows);
+  await mkdir(new URL("./results/", import.meta.url), { recursive: true });
+  await writeFile(new URL("./results/whole.json", import.meta.url), `${JSON.stringify({ node: process.version, loadAfter: loadavg(), rows }, null, 2)}\n`);
   return rows;
 }
 
@@ -156,10 +196,11 @@ function printTable(rows: readonly Record<string, string>[]): void {
   const headers = [...new Set(rows.flatMap((row) => Object.keys(row)))];
   const widths = headers.map((h) => Math.max(h.length, ...rows.map((row) => (row[h] ?? "").length)));
   const line = (cells: readonly string[]): string => `| ${cells.map((text, i) => text.padEnd(widths[i]!)).join(" | ")} |`;
-  console.log(`whole process: node ${bin} build DATA --radius R --out DIR, wall clock from spawn to exit, median of \`runs\`; Node ${process.version}`);
+  console.log(`whole process: node bin/shoal.mjs build DATA --radius R --out DIR, wall clock from spawn to exit, median of \`runs\`; Node ${process.version}, load average now ${loadavg().map((x) => x.toFixed(2)).join(" ")}`);
   console.log("node = bare `node -e 0`; start-up = `node bin/shoal.mjs help` minus that; read and build phases from summary.json's timingsMs;");
   console.log("write+rest = total − node − start-up − read − build (the exports written, and the rest); peak RSS = the child's getrusage maxRSS;");
-  console.log("table = rows × dims × 8 bytes (Float64), lists = 4 bytes per membership and per node offset");
+  console.log("table = rows × dims × 8 bytes (Float64), lists = 4 bytes per membership and per node offset;");
+  console.log("means, write MB/s: in this process, the node means (coverExportChunks), then the four files made and written (writeFileSet), output bytes over the median wall (and CPU) time of 5 runs");
   console.log(line(headers));
   console.log(line(widths.map((w) => "-".repeat(w))));
   for (const row of rows) console.log(line(headers.map((h) => row[h] ?? "")));
