@@ -4,7 +4,7 @@
 // Tables: seeded uniform points in the unit cube, written with 17 significant digits, generated
 // once into a temporary folder (removed at the end). Timings live here, never in tests.
 // --ten-million (or SHOAL_BENCH_TEN_MILLION=1) adds 10,000,000 × 8 (about 1.6 GB of CSV, not
-// committed) and its peak resident memory.
+// committed) and its peak resident memory; --only-ten-million runs that case alone.
 import { execFileSync, spawn } from "node:child_process";
 import { once } from "node:events";
 import { createWriteStream } from "node:fs";
@@ -125,13 +125,13 @@ export async function writeSpeed(input: string, radius: number, folder: string, 
 }
 
 /** Runs the cases and prints the "whole process" table; returns its rows. */
-export async function wholeProcess(options: { tenMillion: boolean }): Promise<Record<string, string>[]> {
+export async function wholeProcess(options: { tenMillion: boolean; onlyTenMillion?: boolean }): Promise<Record<string, string>[]> {
   const folder = await mkdtemp(join(tmpdir(), "shoal-whole-"));
   const rows: Record<string, string>[] = [];
   try {
     execFileSync(process.execPath, [bin, "--version"], { stdio: "ignore" }); // builds the bundle if it is stale, outside the timings
     const { node, help } = startUp();
-    for (const c of options.tenMillion ? [...wholeCases, tenMillionCase] : wholeCases) {
+    for (const c of options.onlyTenMillion ? [tenMillionCase] : options.tenMillion ? [...wholeCases, tenMillionCase] : wholeCases) {
       const input = join(folder, `uniform-${c.rows}x${c.dims}.csv`);
       const t0 = performance.now();
       const bytes = await writeUniformCsv(input, c.rows, c.dims);
@@ -207,5 +207,6 @@ function printTable(rows: readonly Record<string, string>[]): void {
 }
 
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
-  await wholeProcess({ tenMillion: process.argv.includes("--ten-million") || process.env.SHOAL_BENCH_TEN_MILLION === "1" });
+  const onlyTenMillion = process.argv.includes("--only-ten-million");
+  await wholeProcess({ tenMillion: onlyTenMillion || process.argv.includes("--ten-million") || process.env.SHOAL_BENCH_TEN_MILLION === "1", onlyTenMillion });
 }
