@@ -1,7 +1,7 @@
 import type { HotspotScan, ParsedTable } from "../core/index.ts";
 import { hotspotRowsCsv, hotspotsCsv } from "./hotspotFiles.ts";
 import type { HotspotCommand } from "./parseHotspotArgs.ts";
-import type { FileText } from "./writeFileSet.ts";
+import type { FileText } from "./writeTextFile.ts";
 
 interface RunFacts {
   readonly command: HotspotCommand;

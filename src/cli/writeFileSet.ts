@@ -1,15 +1,9 @@
 import { mkdir, readFile, rename, rm, stat } from "node:fs/promises";
 import { join } from "node:path";
-import { writeTextFile } from "./writeTextFile.ts";
+import { writeTextFile, type FileText } from "./writeTextFile.ts";
 
 /** The list of the files Shoal wrote into an output folder, one name a line; only these are ever replaced or removed. */
 export const manifestName = ".shoal-files";
-
-/**
- * A file's text: one string for a small file, or its pieces in order (strings, or bytes of UTF-8
- * text, as the generators of `coverExportChunks` give), written as they come and never joined into one string.
- */
-export type FileText = string | Iterable<string | Uint8Array>;
 
 /** The file-system steps of a swap, injectable so a test can make one fail midway. */
 export interface FileSteps {

@@ -1,6 +1,5 @@
 import { rename, rm } from "node:fs/promises";
-import type { FileText } from "./writeFileSet.ts";
-import { writeTextFile } from "./writeTextFile.ts";
+import { writeTextFile, type FileText } from "./writeTextFile.ts";
 
 /**
  * Writes one output file whole or not at all: the text goes to a staging file beside it, which is

@@ -1,5 +1,10 @@
 import { closeSync, openSync, writeSync } from "node:fs";
-import type { FileText } from "./writeFileSet.ts";
+
+/**
+ * A file's text: one string for a small file, or its pieces in order (strings, or bytes of UTF-8
+ * text, as the generators of `coverExportChunks` give), written as they come and never joined into one string.
+ */
+export type FileText = string | Iterable<string | Uint8Array>;
 
 /** Bytes gathered before one write call. */
 export const writeBatchBytes = 1 << 22; // 4 MiB: few system calls, small beside the tables (our choice, no source)
