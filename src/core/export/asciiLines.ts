@@ -27,14 +27,14 @@ export function* asciiLines(count: number, width: number, pieceBytes: number, li
   if (used > 0) yield buffer.subarray(0, used);
 }
 
+// Digits of a whole number below 2^32, most significant first; `>>> 0` truncates the quotient exactly in that range.
 function writeDigits(buffer: Uint8Array, at: number, value: number): number {
-  let end = at;
-  for (let rest = value; rest >= 10; rest = Math.floor(rest / 10)) ++end;
-  const next = end + 1;
+  const digits = value < 10 ? 1 : value < 100 ? 2 : value < 1e3 ? 3 : value < 1e4 ? 4 : value < 1e5 ? 5 : value < 1e6 ? 6 : value < 1e7 ? 7 : value < 1e8 ? 8 : value < 1e9 ? 9 : 10;
   let rest = value;
-  do {
-    buffer[end--] = 48 + (rest % 10); // "0" is 48
-    rest = Math.floor(rest / 10);
-  } while (rest > 0);
-  return next;
+  for (let i = at + digits - 1; i >= at; --i) {
+    const next = (rest / 10) >>> 0;
+    buffer[i] = 48 + rest - 10 * next; // "0" is 48
+    rest = next;
+  }
+  return at + digits;
 }

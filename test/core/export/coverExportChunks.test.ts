@@ -58,7 +58,7 @@ describe("asciiLines", () => {
   it("writes lines of integers as String() does: 1,0 and 2,10 (the JSDoc example), and 0, 9, 10 and 2^32 − 1", () => {
     const pieces = [...asciiLines(2, 2, 16, (k, cells) => ((cells[0] = k + 1), (cells[1] = 10 * k)))];
     expect(piecesText(pieces)).toBe("1,0\n2,10\n"); // worked by hand
-    const values = [0, 9, 10, 99, 100, 4_294_967_295]; // digit-count edges, and the largest Uint32
+    const values = [0, 9, 10, 99, 100, 999_999_999, 1_000_000_000, 4_294_967_295]; // digit-count edges, and the largest Uint32
     expect(piecesText(asciiLines(values.length, 1, 4, (k, cells) => (cells[0] = values[k]!)))).toBe(values.map((v) => `${v}\n`).join(""));
   });
 
