@@ -10,7 +10,7 @@ const against = (message, ...group) => ({
 const up = (...layers) => layers.flatMap((l) => [`**/${l}/**`, `**/${l}`, `**/${l}.ts`, `**/${l}.tsx`]);
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", "coverage/**", "public/**"] },
+  { ignores: ["dist/**", "cli-build/**", "node_modules/**", "coverage/**", "public/**"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -10,7 +10,13 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "node", environment: "node", include: ["test/{core,worker,state,cli,architecture}/**/*.test.ts"] },
+        test: {
+          name: "node",
+          environment: "node",
+          include: ["test/{core,worker,state,cli,architecture}/**/*.test.ts"],
+          // the command's tests spawn bin/shoal.mjs, which runs the bundle: build it from these sources first
+          globalSetup: ["test/cli/freshBundle.ts"],
+        },
       },
       {
         extends: true,

@@ -4,7 +4,9 @@
 // On the 10,000-row cases the plain computation (bench/plainCover.ts) is timed too and checked
 // to give identical landmarks, balls and edges. --quick (or SHOAL_BENCH_QUICK=1) runs those only.
 // Each case is built again on two threads (bench/threadSteps.ts): the per-step speed-up.
-// Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON).
+// Then the radius sweep against 24 separate builds (bench/sweep.ts, its own table and JSON), the
+// reading speed (bench/readTable.ts), and the whole command as a process (bench/wholeProcess.ts;
+// --ten-million adds 10,000,000 × 8).
 import { mkdir, writeFile } from "node:fs/promises";
 import { cpus, loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
@@ -124,3 +126,7 @@ await import("./sweep.ts"); // prints the sweep table, writes bench/results/swee
 
 console.log("");
 await import("./readTable.ts"); // prints the reading speed (MB/s) of a mixed and a 17-digit file
+
+console.log("");
+const { wholeProcess } = await import("./wholeProcess.ts");
+await wholeProcess({ tenMillion: process.argv.includes("--ten-million") || process.env.SHOAL_BENCH_TEN_MILLION === "1" });

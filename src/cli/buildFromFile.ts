@@ -15,11 +15,13 @@ export interface FileBuild extends ReadOutcome {
   readonly fingerprint: FileFingerprint | null;
   /** Milliseconds the build took. */
   readonly elapsed: number;
+  /** Milliseconds reading the file took (open to parsed table). */
+  readonly readMs: number;
 }
 
 /** Reads a file through the core reader and builds the cover graph with the command's options, on two threads where there are two cores, as `shoal build` does (`explain` too). */
 export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, "input" | "radius" | "read">): Promise<FileBuild> {
-  const { table, report, fileName, fileSize, fingerprint } = await readInput(command.input, command.read, needsFingerprint(command.recipe));
+  const { table, report, fileName, fileSize, fingerprint, readMs } = await readInput(command.input, command.read, needsFingerprint(command.recipe));
   checkRecipeInput(command.recipe, fileName, fingerprint);
   const features = resolveFeatures(table, command);
   for (const name of command.outcomes) {
@@ -45,5 +47,5 @@ export async function buildFromFile(command: CommonOptions & Pick<BuildCommand, 
   }
   const elapsed = performance.now() - started;
   const reading = readingRecord(report.format, command.read.ragged);
-  return { table, report, fileName, fileSize, radius, result, reading, fingerprint, elapsed };
+  return { table, report, fileName, fileSize, radius, result, reading, fingerprint, elapsed, readMs };
 }

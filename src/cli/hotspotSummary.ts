@@ -1,6 +1,7 @@
 import type { HotspotScan, ParsedTable } from "../core/index.ts";
 import { hotspotRowsCsv, hotspotsCsv } from "./hotspotFiles.ts";
 import type { HotspotCommand } from "./parseHotspotArgs.ts";
+import type { FileText } from "./writeTextFile.ts";
 
 interface RunFacts {
   readonly command: HotspotCommand;
@@ -11,7 +12,7 @@ interface RunFacts {
 }
 
 /** The three hotspot files: hotspots.csv, hotspot-rows.csv and hotspots.json (every parameter, the candidate count, rows left out, timings). */
-export function hotspotFileTexts(scan: HotspotScan, parsed: ParsedTable, facts: RunFacts): Record<string, string> {
+export function hotspotFileTexts(scan: HotspotScan, parsed: ParsedTable, facts: RunFacts): Record<string, FileText> {
   const { command } = facts;
   const json = {
     file: facts.fileName,

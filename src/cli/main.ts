@@ -19,8 +19,12 @@ shoal draw DATA --colour-by COL --out F.svg  a picture of the graph with legend 
 shoal help [build | sweep | explain | hotspots | draw]  the options of a command (also: shoal build --help)
 shoal --version                           the version`;
 
-/** The version in package.json. */
+/** Set to package.json's version by the bundler (scripts/buildCli.mjs); absent when the sources run as they are. */
+declare const SHOAL_VERSION: string | undefined;
+
+/** The version in package.json: inlined in the bundle, which lives in another folder; read from the file otherwise. */
 export function version(): string {
+  if (typeof SHOAL_VERSION === "string") return SHOAL_VERSION;
   return (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
 }
 

@@ -38,19 +38,32 @@ export function readByteOptions(values: { readonly [K in keyof typeof readOption
 }
 
 /**
- * Reads a table file through the core pipeline the workbench's worker uses, so both see the same
- * table. With `fingerprint` (a recipe run) node:crypto's SHA-256 is taken over the bytes as they
- * are read (about 0.4 s per 200 MiB here, so only when asked for); otherwise `fingerprint` is null.
+ * The headless command's file-size limit: none. The workbench stops at 1 GiB (`maxInputBytes`),
+ * a browser tab's memory; here the table only has to fit in the machine's memory (8 bytes per
+ * numeric cell, plus the texts of text columns). Parquet files, read whole, keep the 1 GiB limit.
  */
-export async function readInput(path: string, options: ByteReadOptions, fingerprint = false): Promise<ReadOutcome & { fileName: string; fileSize: number; fingerprint: FileFingerprint | null }> {
+export const headlessInputBytes = Number.POSITIVE_INFINITY;
+
+/**
+ * Reads a table file through the core pipeline the workbench's worker uses, so both see the same
+ * table; `readMs` is the time from open to table. With `fingerprint` (a recipe run) node:crypto's
+ * SHA-256 is taken over the bytes as they are read (about 0.4 s per 200 MiB here, so only when
+ * asked for); otherwise `fingerprint` is null.
+ */
+export async function readInput(
+  path: string,
+  options: ByteReadOptions,
+  fingerprint = false,
+): Promise<ReadOutcome & { fileName: string; fileSize: number; readMs: number; fingerprint: FileFingerprint | null }> {
+  const started = performance.now();
   const handle = await open(path, "r").catch(() => {
     throw new Error(`cannot read input file: ${path}`);
   });
   try {
     const { size } = await handle.stat();
     const hash = fingerprint ? createHash("sha256") : null;
-    const outcome = await readTableBytes(fileSource(handle, size), options, { utf8, ...(hash ? { onBytes: (bytes: Uint8Array) => void hash.update(bytes) } : {}) });
-    return { ...outcome, fileName: basename(path), fileSize: size, fingerprint: hash ? { bytes: size, sha256: hash.digest("hex") } : null };
+    const outcome = await readTableBytes(fileSource(handle, size), options, { utf8, maxBytes: headlessInputBytes, ...(hash ? { onBytes: (bytes: Uint8Array) => void hash.update(bytes) } : {}) });
+    return { ...outcome, fileName: basename(path), fileSize: size, readMs: performance.now() - started, fingerprint: hash ? { bytes: size, sha256: hash.digest("hex") } : null };
   } finally {
     await handle.close();
   }

@@ -1,7 +1,8 @@
 import { existsSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { Resvg } from "@resvg/resvg-js";
+import { createRequire } from "node:module";
+import type { Resvg as ResvgClass } from "@resvg/resvg-js";
 
 const fontPath = join("assets", "fonts", "DejaVuSans.ttf");
 
@@ -20,6 +21,9 @@ export function shippedFont(): string {
  * every machine.
  */
 export function renderPng(svg: string, density: number): Uint8Array {
+  // loaded on first use, through Node's own resolution: its native binary cannot go into the
+  // command's bundle, and other commands need not load it at start-up
+  const { Resvg } = createRequire(import.meta.url)("@resvg/resvg-js") as { Resvg: typeof ResvgClass };
   const font = shippedFont();
   const image = new Resvg(svg, {
     fitTo: { mode: "zoom", value: density },

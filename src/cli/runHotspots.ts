@@ -1,4 +1,4 @@
-import { coverExports, scanHotspots } from "../core/index.ts";
+import { coverExportChunks, coverSummary, scanHotspots } from "../core/index.ts";
 import { buildFromFile } from "./buildFromFile.ts";
 import { hotspotFileTexts } from "./hotspotSummary.ts";
 import type { HotspotCommand } from "./parseHotspotArgs.ts";
@@ -12,12 +12,13 @@ import { recipeOfRun, recipeRegionRows, recipeToSave, saveRecipe } from "./recip
  */
 export async function runHotspots(command: HotspotCommand): Promise<string> {
   const built = await buildFromFile(command);
-  const { table, fileName, fileSize, radius, result, reading, fingerprint, elapsed } = built;
+  const { table, fileName, fileSize, radius, result, reading, fingerprint, elapsed, readMs } = built;
   const column = table.columns.find((c) => c.name === command.scan);
   if (!column) throw new Error(`unknown column: ${command.scan}`);
   if (column.kind !== "numeric") throw new Error(`not a numeric column: ${command.scan}`);
-  const files = coverExports(table, result, { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading });
-  const summary = { ...JSON.parse(files["summary.json"]), timingsMs: { ...result.timings, total: elapsed } };
+  const context = { fileName, fileSize, idColumn: command.idColumn, outcomes: command.outcomes, reading };
+  const files = coverExportChunks(table, result, context);
+  const summary = { ...coverSummary(result, context), timingsMs: { read: readMs, ...result.timings, total: elapsed } };
   const started = performance.now();
   const scan = scanHotspots(table, result, {
     outcome: command.scan,
@@ -37,9 +38,9 @@ export async function runHotspots(command: HotspotCommand): Promise<string> {
   const regions = recipeRegionRows(command.recipe, result.rowsRead);
   const recipe = recipeToSave(command.recipe, () => recipeOfRun(command, { fileName, fingerprint: fingerprint!, read: command.read, params: result.params, regions, hotspots }));
   await writeFileSet(command.outDir, {
-    "nodes.csv": files["nodes.csv"],
-    "members.csv": files["members.csv"],
-    "edges.csv": files["edges.csv"],
+    "nodes.csv": files["nodes.csv"](),
+    "members.csv": files["members.csv"](),
+    "edges.csv": files["edges.csv"](),
     "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
     ...hotspotFileTexts(scan, table, { command, fileName, radius, buildMs: elapsed, scanMs: scanTime }),
   });

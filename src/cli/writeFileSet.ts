@@ -1,5 +1,6 @@
-import { mkdir, readFile, rename, rm, stat, writeFile } from "node:fs/promises";
+import { mkdir, readFile, rename, rm, stat } from "node:fs/promises";
 import { join } from "node:path";
+import { writeTextFile, type FileText } from "./writeTextFile.ts";
 
 /** The list of the files Shoal wrote into an output folder, one name a line; only these are ever replaced or removed. */
 export const manifestName = ".shoal-files";
@@ -7,10 +8,10 @@ export const manifestName = ".shoal-files";
 /** The file-system steps of a swap, injectable so a test can make one fail midway. */
 export interface FileSteps {
   readonly rename: (from: string, to: string) => Promise<void>;
-  readonly writeFile: (path: string, text: string) => Promise<void>;
+  readonly writeFile: (path: string, text: FileText) => Promise<void>;
 }
 
-const nodeSteps: FileSteps = { rename, writeFile };
+const nodeSteps: FileSteps = { rename, writeFile: writeTextFile };
 
 /**
  * Replaces the set of Shoal's files in `outDir` as a whole, so that after any failure the folder
@@ -23,7 +24,7 @@ const nodeSteps: FileSteps = { rename, writeFile };
  * A failure in steps 2–3 removes what was moved in and moves the backup back, then throws.
  * Files not named in a manifest are never touched. Every move is a rename within one folder's file system.
  */
-export async function writeFileSet(outDir: string, files: Readonly<Record<string, string>>, steps: FileSteps = nodeSteps): Promise<void> {
+export async function writeFileSet(outDir: string, files: Readonly<Record<string, FileText>>, steps: FileSteps = nodeSteps): Promise<void> {
   const existing = await stat(outDir).catch(() => null);
   if (existing && !existing.isDirectory()) throw new Error(`output path is not a folder: ${outDir}`);
   const names = Object.keys(files);

@@ -14,7 +14,7 @@ export interface Run {
   readonly stderr: string;
 }
 
-/** Runs `node bin/shoal.mjs …args` as a real process (about half a second each, for tsx) and collects its exit code and output. */
+/** Runs `node bin/shoal.mjs …args` as a real process, as a user does (the bundle, rebuilt by freshBundle.ts before the tests), and collects its exit code and output. */
 export function runShoal(args: readonly string[]): Promise<Run> {
   return new Promise((resolve, reject) => {
     execFile(process.execPath, [binPath, ...args], { cwd: repoRoot, timeout: 30_000 }, (error, stdout, stderr) => {

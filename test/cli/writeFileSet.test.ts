@@ -73,6 +73,30 @@ describe("writeFileSet: Shoal's files in --out are replaced as a set", () => {
     expect(await read(out, "a.csv")).toBe("old\n");
   });
 
+  it("a file given as pieces (a generator) is written as their concatenation, in order: \"a,b\\n1,2\\n3,4\\n\"", async () => {
+    const out = await scratch();
+    function* pieces(): Generator<string> {
+      yield "a,b\n";
+      yield "1,2\n";
+      yield "3,4\n";
+    }
+    await writeFileSet(out, { "t.csv": pieces(), "s.json": "{}\n" });
+    expect(await read(out, "t.csv")).toBe("a,b\n1,2\n3,4\n"); // the pieces above, joined
+    expect(await read(out, "s.json")).toBe("{}\n");
+  });
+
+  it("a generator that throws midway leaves the previous set untouched and no staging folder", async () => {
+    const out = await scratch();
+    await writeFileSet(out, { "t.csv": "old\n" });
+    function* failing(): Generator<string> {
+      yield "new\n";
+      throw new Error("export failed");
+    }
+    await expect(writeFileSet(out, { "t.csv": failing() })).rejects.toThrow(`cannot write to ${out}: export failed`);
+    expect(await listed(out)).toEqual([manifestName, "t.csv"]);
+    expect(await read(out, "t.csv")).toBe("old\n");
+  });
+
   it("a manifest line naming a path outside the folder or a hidden file is ignored, so such a file is never removed", async () => {
     const folder = await scratch();
     const out = join(folder, "out");

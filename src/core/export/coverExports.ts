@@ -1,9 +1,7 @@
 import type { CoverResult } from "../cover/buildCover.ts";
-import { nodeMeans } from "../cover/nodeMeans.ts";
-import { cellText } from "../table/cellText.ts";
 import type { DecimalMark, DelimiterName, RaggedPolicy } from "../table/readOptions.ts";
 import type { ParsedTable } from "../table/types.ts";
-import { csvLine, csvNumber, csvQuoted, csvText } from "./csvCell.ts";
+import { coverExportChunks, piecesText, type ExportColumns } from "./coverExportChunks.ts";
 import type { Region } from "./regionRowsCsv.ts";
 
 /**
@@ -17,13 +15,9 @@ export type ReadingRecord =
   | { readonly format: "delimited"; readonly delimiter: DelimiterName; readonly decimal: DecimalMark; readonly ragged: RaggedPolicy }
   | { readonly format: "parquet" };
 
-export interface ExportContext {
+export interface ExportContext extends ExportColumns {
   readonly fileName: string;
   readonly fileSize: number;
-  /** Identifier column written beside each row in members.csv; null for none. */
-  readonly idColumn: string | null;
-  /** Outcome columns whose node means follow the features' in nodes.csv. */
-  readonly outcomes: readonly string[];
   /** How the file was read; written as `input.reading` in summary.json (null when absent). */
   readonly reading?: ReadingRecord;
   /** Regions kept by name (0-based rows); listed as `regions` in summary.json (empty when absent). */
@@ -40,33 +34,23 @@ export interface CoverExports {
 /**
  * The export tables (schema version 2; documented in the README, whose key list a test compares with this). Nodes are numbered from 1
  * in the order their landmarks were chosen; `row` and `landmark_row` are 1-based data-record
- * numbers of the input file, counting every record including those left out.
+ * numbers of the input file, counting every record including those left out. Each table is the
+ * concatenation of its pieces from `coverExportChunks`, which the headless command streams instead.
  */
 export function coverExports(parsed: ParsedTable, result: CoverResult, context: ExportContext): CoverExports {
-  const nodes = result.landmarks.length;
-  const meanColumns = [...new Set([...result.params.features, ...context.outcomes])];
-  const means = meanColumns.map((name) => nodeMeans(columnNumbers(parsed, name), result.members));
-  let nodesCsv = csvLine(["node", "landmark_row", "size", ...meanColumns.map((name) => csvText(`mean_${name}`))]);
-  for (let k = 0; k < nodes; ++k) {
-    const size = result.members.offsets[k + 1]! - result.members.offsets[k]!;
-    nodesCsv += csvLine([String(k + 1), String(result.landmarks[k]! + 1), String(size), ...means.map((m) => csvNumber(m[k]!))]);
-  }
+  const chunks = coverExportChunks(parsed, result, context);
+  return {
+    "nodes.csv": piecesText(chunks["nodes.csv"]()),
+    "members.csv": piecesText(chunks["members.csv"]()),
+    "edges.csv": piecesText(chunks["edges.csv"]()),
+    "summary.json": `${JSON.stringify(coverSummary(result, context), null, 2)}\n`,
+  };
+}
 
-  const ids = context.idColumn === null ? null : idCells(parsed, context.idColumn);
-  const memberHeader = ["node", "row", ...(context.idColumn === null ? [] : [csvText(context.idColumn)])];
-  const memberLines: string[] = [csvLine(memberHeader)];
-  for (let k = 0; k < nodes; ++k) {
-    for (let t = result.members.offsets[k]!; t < result.members.offsets[k + 1]!; ++t) {
-      const row = result.members.items[t]!;
-      memberLines.push(csvLine([String(k + 1), String(row + 1), ...(ids ? [ids(row)] : [])]));
-    }
-  }
-
-  const { source, target, shared } = result.edges;
-  const edgeLines: string[] = [csvLine(["source", "target", "shared"])];
-  for (let e = 0; e < source.length; ++e) edgeLines.push(csvLine([String(source[e]! + 1), String(target[e]! + 1), String(shared[e]!)]));
-
-  const summary = {
+/** The object summary.json holds (its text is this object by `JSON.stringify(summary, null, 2)` and a line end). */
+export function coverSummary(result: CoverResult, context: ExportContext) {
+  const { source } = result.edges;
+  return {
     schema: "shoal-cover-export",
     schemaVersion: exportSchemaVersion,
     input: { fileName: context.fileName, fileSize: context.fileSize, reading: context.reading ?? null },
@@ -88,7 +72,7 @@ export function coverExports(parsed: ParsedTable, result: CoverResult, context: 
       imputedValues: { ...result.imputed },
     },
     constantColumns: [...result.constantColumns],
-    nodes,
+    nodes: result.landmarks.length,
     edges: source.length,
     components: result.componentCount,
     cycleRank: result.cycleRank,
@@ -97,24 +81,4 @@ export function coverExports(parsed: ParsedTable, result: CoverResult, context: 
     memberships: result.members.items.length,
     regions: (context.regions ?? []).map((region) => ({ name: region.name, rowCount: region.rows.length, records: Array.from(region.rows, (r) => r + 1) })),
   };
-  return {
-    "nodes.csv": nodesCsv,
-    "members.csv": memberLines.join(""),
-    "edges.csv": edgeLines.join(""),
-    "summary.json": `${JSON.stringify(summary, null, 2)}\n`,
-  };
-}
-
-function columnNumbers(parsed: ParsedTable, name: string): Float64Array {
-  const column = parsed.columns.find((c) => c.name === name);
-  if (!column) throw new Error(`unknown column: ${name}`);
-  return column.numbers;
-}
-
-// A numeric id is written as read (007 stays 007, digits past 2^53 are kept) and never neutralised, so -5 stays -5; a text id as safe text.
-function idCells(parsed: ParsedTable, name: string): (row: number) => string {
-  const column = parsed.columns.find((c) => c.name === name);
-  if (!column) throw new Error(`unknown column: ${name}`);
-  const texts = column.texts;
-  return texts ? (row) => csvText(texts[row]!) : (row) => csvQuoted(cellText(column, row));
 }

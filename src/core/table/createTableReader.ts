@@ -25,13 +25,14 @@ export interface TableReader {
  * Lines without quotes are split by the sink itself (`RecordSink.takePlain`), with no string per
  * numeric cell; `plainScan` false sends every record through papaparse instead (the reference
  * path that test/core/table/plainScan.test.ts compares with; the outcome is the same).
+ * Text past `maxCharacters` (default `maxInputBytes`) is refused.
  * Cost: O(text length); memory: 8 bytes per numeric cell plus the texts of text columns.
  * @example
  * const reader = createTableReader();
  * reader.push("x;y\n1,5;2\n");
  * reader.finish().table.columns[0]!.numbers // => Float64Array [1.5]
  */
-export function createTableReader(options: ReadOptions = {}, plainScan = true): TableReader {
+export function createTableReader(options: ReadOptions = {}, plainScan = true, maxCharacters: number = maxInputBytes): TableReader {
   const delimiterOption = options.delimiter === undefined ? undefined : maybeDelimiter(options.delimiter);
   const decimalOption = options.decimal === undefined ? undefined : maybeDecimalMark(options.decimal);
   const ragged = maybeRaggedPolicy(options.ragged ?? "reject");
@@ -80,7 +81,7 @@ export function createTableReader(options: ReadOptions = {}, plainScan = true): 
       if (outcome) throw new Error("cannot push text after finish");
       guard(() => {
         characters += text.length;
-        if (characters > maxInputBytes) throw new Error(`the file is too large: more than ${maxInputBytes} characters (the limit is 1 GiB)`);
+        if (characters > maxCharacters) throw new Error(`the file is too large: more than ${maxCharacters} characters (the limit is ${maxCharacters / 2 ** 30} GiB)`);
         feed(ends.push(text));
       });
     },

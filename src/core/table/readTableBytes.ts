@@ -31,6 +31,8 @@ export interface ByteReadControl {
   readonly chunkBytes?: number;
   /** Sees every byte of the file once, in order, as it is read (a fingerprint's hash is fed here). */
   readonly onBytes?: (bytes: Uint8Array) => void;
+  /** Largest file read, in bytes (default `maxInputBytes`, 1 GiB; the headless command passes Infinity). Parquet, read whole, keeps 1 GiB. */
+  readonly maxBytes?: number;
 }
 
 export const readChunkBytes = 1 << 22; // 4 MiB per step: progress and cancellation every few tens of milliseconds
@@ -44,7 +46,7 @@ export const readChunkBytes = 1 << 22; // 4 MiB per step: progress and cancellat
  */
 export async function readTableBytes(source: ByteSource, options: ByteReadOptions, control: ByteReadControl): Promise<ReadOutcome> {
   const { size } = source;
-  checkInputSize(size);
+  checkInputSize(size, control.maxBytes);
   if (size === 0) throw new Error("the file is empty");
   const stop = (): void => {
     if (control.shouldStop?.()) throw new Cancelled("reading the file");
@@ -59,7 +61,7 @@ export async function readTableBytes(source: ByteSource, options: ByteReadOption
   const encoding = options.encoding ?? detected.encoding;
   const decode: Utf8Decoder = encoding === "utf-8" ? control.utf8() : (bytes) => decodeWindows1252(bytes);
   const { encoding: _chosen, ...readOptions } = options;
-  const reader = createTableReader(readOptions);
+  const reader = createTableReader(readOptions, true, control.maxBytes);
   const step = control.chunkBytes ?? readChunkBytes;
   control.onBytes?.(head.subarray(0, detected.bomLength));
   for (let start = detected.bomLength; start < size; start += step) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { nodeMeans, nodeMembers } from "../../../src/core/index.ts";
+import { nodeMeans, nodeMembers, randomSource } from "../../../src/core/index.ts";
 import { assertClose } from "../../assertClose.ts";
 
 describe("nodeMeans", () => {
@@ -17,6 +17,43 @@ describe("nodeMeans", () => {
   it("an empty node gives NaN and no nodes give an empty array", () => {
     assertClose(nodeMeans(Float64Array.of(1), { offsets: Uint32Array.of(0, 0), items: new Uint32Array(0) }), [NaN]);
     expect(nodeMeans(Float64Array.of(1), { offsets: Uint32Array.of(0), items: new Uint32Array(0) }).length).toBe(0);
+  });
+});
+
+/** The plain loop, node by node in list order: the reference the blocked pass must match bit for bit. */
+function plainMeans(column: Float64Array, offsets: Uint32Array, items: Uint32Array): number[] {
+  const means: number[] = [];
+  for (let k = 0; k + 1 < offsets.length; ++k) {
+    let sum = 0;
+    let count = 0;
+    for (let t = offsets[k]!; t < offsets[k + 1]!; ++t) {
+      const x = column[items[t]!]!;
+      if (Number.isNaN(x)) continue;
+      sum += x;
+      count++;
+    }
+    means.push(count === 0 ? NaN : sum / count);
+  }
+  return means;
+}
+
+describe("nodeMeans on a column longer than one block (100,000 rows)", () => {
+  const random = randomSource(5);
+  const rows = 100_000;
+  const column = Float64Array.from({ length: rows }, () => (random() < 0.01 ? NaN : (random() - 0.5) * 1e6));
+  const lists: number[][] = Array.from({ length: 40 }, () => []);
+  for (let row = 0; row < rows; ++row) for (const list of lists) if (random() < 0.05) list.push(row);
+  lists.push([]); // an empty node
+  const offsets = Uint32Array.from([0, ...lists.map((_, k) => lists.slice(0, k + 1).reduce((n, l) => n + l.length, 0))]);
+
+  it("ascending lists (the blocked pass) give the plain loop's means bit for bit", () => {
+    const items = Uint32Array.from(lists.flat());
+    expect(Array.from(nodeMeans(column, { offsets, items }))).toEqual(plainMeans(column, offsets, items)); // toEqual compares with Object.is: the same doubles
+  });
+
+  it("a list out of order (the plain pass) gives the plain loop's means too", () => {
+    const items = Uint32Array.from(lists.flatMap((list, k) => (k === 3 ? [...list].reverse() : list)));
+    expect(Array.from(nodeMeans(column, { offsets, items }))).toEqual(plainMeans(column, offsets, items));
   });
 });
 
