@@ -1,6 +1,6 @@
 import { expect, it } from "vitest";
 import { assertClose } from "../assertClose.ts";
-import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
+import { probe, settledNodes } from "./graphProbeSupport.ts";
 import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // Moving through the demo's graph: wheel zoom about the pointer, pan by dragging empty space, Fit,
@@ -10,22 +10,6 @@ import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrows
 const session = useBrowserSession();
 type Page = LaunchedBrowser["page"];
 type NodePoint = { node: number; x: number; y: number };
-
-const probe = <T>(page: Page, read: (graph: GraphProbe) => T): Promise<T> =>
-  page.evaluate(`(${read.toString()})(window.shoalGraph)`) as Promise<T>;
-
-/** Node centres once the layout has stopped moving (two reads 600 ms apart agree). */
-async function settledNodes(page: Page): Promise<NodePoint[]> {
-  let previous = "";
-  for (let attempt = 0; attempt < 60; ++attempt) {
-    await page.waitForTimeout(600);
-    const nodes = await probe(page, (g) => g.nodes().map(({ node, x, y }) => ({ node, x, y })));
-    const text = JSON.stringify(nodes);
-    if (nodes.length > 0 && text === previous) return nodes;
-    previous = text;
-  }
-  throw new Error("the layout did not settle");
-}
 
 async function openDemo(page: Page): Promise<NodePoint[]> {
   await page.goto(`${session.preview().url}?probe`); // the graph probe is installed only with ?probe

@@ -1,15 +1,11 @@
 import { expect, it } from "vitest";
-import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
-import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
+import { probe } from "./graphProbeSupport.ts";
+import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession } from "./harness.ts";
 
 // Outcome hotspots on the demo table: scan failed_within_90d in the worker, see a top hotspot
 // beyond chance, choose it, and find it kept as region "hotspot 1" with its nodes selected.
 
 const session = useBrowserSession();
-type Page = LaunchedBrowser["page"];
-
-const probe = <T>(page: Page, read: (graph: GraphProbe) => T): Promise<T> =>
-  page.evaluate(`(${read.toString()})(window.shoalGraph)`) as Promise<T>;
 
 it("demo: a scan of failed_within_90d with 199 replicates finds a top hotspot with p ≤ 0.05, and choosing it keeps region 'hotspot 1' and selects its nodes", async () => {
   const { page } = session.browser();

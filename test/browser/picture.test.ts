@@ -1,6 +1,6 @@
 import { mkdir, readFile, writeFile } from "node:fs/promises";
 import { expect, it } from "vitest";
-import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
+import { settledNodes } from "./graphProbeSupport.ts";
 import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // "Save picture" on the demo as a person uses it: open the form, save an SVG and a 2× PNG, and read
@@ -9,22 +9,6 @@ import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, ty
 
 const session = useBrowserSession();
 type Page = LaunchedBrowser["page"];
-
-const probe = <T>(page: Page, read: (graph: GraphProbe) => T): Promise<T> =>
-  page.evaluate(`(${read.toString()})(window.shoalGraph)`) as Promise<T>;
-
-/** Node centres once the layout has stopped moving (two reads 600 ms apart agree). */
-async function settledNodes(page: Page): Promise<{ node: number; x: number; y: number }[]> {
-  let previous = "";
-  for (let attempt = 0; attempt < 60; ++attempt) {
-    await page.waitForTimeout(600);
-    const nodes = await probe(page, (g) => g.nodes());
-    const text = JSON.stringify(nodes);
-    if (nodes.length > 0 && text === previous) return nodes;
-    previous = text;
-  }
-  throw new Error("the layout did not settle");
-}
 
 async function saveAs(page: Page, button: string): Promise<{ name: string; bytes: Buffer }> {
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: button }).click()]);

@@ -1,6 +1,6 @@
 import { expect, it } from "vitest";
 import { pointsInPolygon, type Point } from "../../src/ui/graph/pointInPolygon.ts";
-import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
+import { probe, settledNodes } from "./graphProbeSupport.ts";
 import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // Regions as a person makes them on the demo: lasso nodes on the canvas (in lasso mode: a plain drag
@@ -10,22 +10,6 @@ import { recordPageErrors, saveScreenshot, useBrowserSession, type LaunchedBrows
 
 const session = useBrowserSession();
 type Page = LaunchedBrowser["page"];
-
-const probe = <T>(page: Page, read: (graph: GraphProbe) => T): Promise<T> =>
-  page.evaluate(`(${read.toString()})(window.shoalGraph)`) as Promise<T>;
-
-/** Node centres once the layout has stopped moving (two reads 600 ms apart agree). */
-async function settledNodes(page: Page): Promise<{ node: number; x: number; y: number }[]> {
-  let previous = "";
-  for (let attempt = 0; attempt < 60; ++attempt) {
-    await page.waitForTimeout(600);
-    const nodes = await probe(page, (g) => g.nodes());
-    const text = JSON.stringify(nodes);
-    if (nodes.length > 0 && text === previous) return nodes;
-    previous = text;
-  }
-  throw new Error("the layout did not settle");
-}
 
 /** Drags a closed polygon (canvas CSS pixels) with the mouse, through each vertex and back to the first. */
 async function dragLasso(page: Page, polygon: readonly Point[], shift = false): Promise<void> {

@@ -1,7 +1,7 @@
 import { readFile } from "node:fs/promises";
 import { strFromU8, unzipSync } from "fflate";
 import { expect, it } from "vitest";
-import type { GraphProbe } from "../../src/ui/graph/graphProbe.ts";
+import { probe, settledNodes } from "./graphProbeSupport.ts";
 import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, type LaunchedBrowser } from "./harness.ts";
 
 // The session kept in the page's IndexedDB: a reload brings back the same graph, colour, regions and
@@ -10,22 +10,6 @@ import { recordPageErrors, recordRequests, saveScreenshot, useBrowserSession, ty
 
 const session = useBrowserSession();
 type Page = LaunchedBrowser["page"];
-
-const probe = <T>(page: Page, read: (graph: GraphProbe) => T): Promise<T> =>
-  page.evaluate(`(${read.toString()})(window.shoalGraph)`) as Promise<T>;
-
-/** Node centres once the layout has stopped moving (two reads 600 ms apart agree). */
-async function settledNodes(page: Page): Promise<{ node: number; x: number; y: number }[]> {
-  let previous = "";
-  for (let attempt = 0; attempt < 60; ++attempt) {
-    await page.waitForTimeout(600);
-    const nodes = await probe(page, (g) => g?.nodes() ?? []);
-    const text = JSON.stringify(nodes);
-    if (nodes.length > 0 && text === previous) return nodes;
-    previous = text;
-  }
-  throw new Error("the layout did not settle");
-}
 
 /** What a person would check after a reload: counts, colour, regions, selection, the exported tables. */
 async function workbenchState(page: Page) {
