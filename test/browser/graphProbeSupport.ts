@@ -15,7 +15,7 @@ export async function settledNodes(page: Page): Promise<{ node: number; x: numbe
   let previous = "";
   for (let attempt = 0; attempt < 60; ++attempt) {
     await page.waitForTimeout(600);
-    const nodes = await probe(page, (g) => g?.nodes() ?? []);
+    const nodes = await probe(page, (g) => (g?.nodes() ?? []).map(({ node, x, y }) => ({ node, x, y })));
     const text = JSON.stringify(nodes);
     if (nodes.length > 0 && text === previous) return nodes;
     previous = text;
