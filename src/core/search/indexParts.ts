@@ -1,6 +1,7 @@
 import { maybeMetric } from "../metric/metrics.ts";
 import type { MetricName } from "../metric/types.ts";
 import { rowIndexOf, type RowIndex } from "./rowIndex.ts";
+import type { KdTree } from "./kdTree.ts";
 import type { Norm } from "./searchSpace.ts";
 
 /** Copies a typed array into memory another thread reads without a copy (a SharedArrayBuffer); identity where nothing is shared. */
@@ -20,16 +21,8 @@ export interface IndexParts {
   readonly radius: number;
   /** The search space's points (the table's values when `same`), its norm, and its threshold at `radius`. */
   readonly space: { readonly points: Float64Array; readonly dims: number; readonly norm: Norm; readonly exact: boolean; readonly limit: number } | null;
-  readonly tree: {
-    readonly rowAt: Uint32Array;
-    readonly positionOf: Uint32Array;
-    readonly coords: Float64Array;
-    readonly start: Uint32Array;
-    readonly end: Uint32Array;
-    readonly firstChild: Uint32Array;
-    readonly lo: Float64Array;
-    readonly hi: Float64Array;
-  } | null;
+  /** The tree's arrays (KdTree's; its dims are the search space's). */
+  readonly tree: Omit<KdTree, "dims"> | null;
   /** The index's judgement at `radius` (RowIndex.mode): only speed depends on it. */
   readonly mode: RowIndex["mode"];
 }
