@@ -16,32 +16,38 @@ export interface NodeTable {
   readonly columns: readonly NodeTableColumn[];
 }
 
-const memoTable = memoizeLast(
-  (table: ParsedTable | null, result: WorkbenchState["result"], columns: readonly string[], colour: Float64Array | null, colourCaption: string | null): NodeTable | null => {
-    if (!table || !result) return null;
-    const { offsets } = result.members;
-    const nodes = result.landmarks.length;
-    const sizes = new Float64Array(nodes);
-    for (let k = 0; k < nodes; ++k) sizes[k] = offsets[k + 1]! - offsets[k]!;
-    const out: NodeTableColumn[] = [{ key: "@size", label: "rows", values: sizes }];
-    if (colour && colourCaption) out.push({ key: "@colour", label: `colour: ${colourCaption}`, values: colour });
-    for (const name of columns) {
-      const column = table.columns.find((c) => c.name === name);
-      if (column) out.push({ key: `mean:${name}`, label: `mean ${name}`, values: nodeMeans(column.numbers, result.members) });
-    }
-    return { nodes, columns: out };
-  },
-);
+// the member counts and column means depend on the result and the columns only, not on the colour
+const memoMeans = memoizeLast((table: ParsedTable | null, result: WorkbenchState["result"], columns: readonly string[]): NodeTableColumn[] | null => {
+  if (!table || !result) return null;
+  const { offsets } = result.members;
+  const nodes = result.landmarks.length;
+  const sizes = new Float64Array(nodes);
+  for (let k = 0; k < nodes; ++k) sizes[k] = offsets[k + 1]! - offsets[k]!;
+  const out: NodeTableColumn[] = [{ key: "@size", label: "rows", values: sizes }];
+  for (const name of columns) {
+    const column = table.columns.find((c) => c.name === name);
+    if (column) out.push({ key: `mean:${name}`, label: `mean ${name}`, values: nodeMeans(column.numbers, result.members) });
+  }
+  return out;
+});
+
+const memoTable = memoizeLast((counted: NodeTableColumn[] | null, nodes: number, colour: Float64Array | null, colourCaption: string | null): NodeTable | null => {
+  if (!counted) return null;
+  const [size, ...means] = counted;
+  const colourColumn = colour && colourCaption ? [{ key: "@colour", label: `colour: ${colourCaption}`, values: colour }] : [];
+  return { nodes, columns: [size!, ...colourColumn, ...means] };
+});
 
 /**
  * The node table's columns, derived from the result: member counts, the colour values (when the
  * fill is numeric) and node means of the node pane's columns (`nodeMeans`, O(memberships) each, on
- * the main thread; computed only while the table is shown, once per result and colour choice).
+ * the main thread; computed only while the table is shown, once per result and column list, not
+ * again when only the colour changes).
  */
 export function selectNodeTable(s: WorkbenchState): NodeTable | null {
   const fill = selectNodeFill(s);
   const numeric = fill?.kind === "sequential" ? fill : null;
-  return memoTable(s.table, s.result, memoColumns(selectStatsColumns(s)), numeric?.values ?? null, numeric?.caption ?? null);
+  return memoTable(memoMeans(s.table, s.result, memoColumns(selectStatsColumns(s))), s.result?.landmarks.length ?? 0, numeric?.values ?? null, numeric?.caption ?? null);
 }
 
 // selectStatsColumns builds a new array on every call: keep the last one while its names are the same
