@@ -4,6 +4,7 @@ import type { RecipeOutcome } from "../../state/recipeActions.ts";
 import { selectCanWriteRecipe } from "../../state/recipeFromState.ts";
 import { downloadBytes } from "../download.ts";
 import { useWorkbench } from "../useWorkbench.ts";
+import { HiddenFileInput, tableFileTypes } from "./HiddenFileInput.tsx";
 
 /**
  * "Save recipe" writes how the graph on screen was made (recipe.json, README "Recipes");
@@ -32,18 +33,7 @@ export function RecipeControls() {
       <button type="button" onClick={() => input.current?.click()} title="Apply a saved recipe to the loaded table">
         Open recipe…
       </button>
-      <input
-        ref={input}
-        type="file"
-        accept=".json,application/json"
-        hidden
-        data-testid="recipe-input"
-        onChange={(event) => {
-          const file = event.currentTarget.files?.[0];
-          if (file) void file.text().then((text) => open(text));
-          event.currentTarget.value = "";
-        }}
-      />
+      <HiddenFileInput inputRef={input} accept=".json,application/json" testId="recipe-input" onFile={(file) => void file.text().then((text) => open(text))} />
       {outcome?.kind === "applied" && (
         <span className="note recipe-message" data-testid="recipe-status">
           Recipe applied
@@ -57,18 +47,12 @@ export function RecipeControls() {
           <button type="button" className="quiet" aria-label="close" onClick={() => setOpened(null)}>×</button>
         </span>
       )}
-      <input
-        ref={tableInput}
-        type="file"
-        accept=".csv,.tsv,.txt,.parquet,text/csv,text/tab-separated-values"
-        hidden
-        data-testid="recipe-table-input"
-        onChange={(event) => {
-          const file = event.currentTarget.files?.[0];
-          // the table first, then the recipe that asked for it
-          if (file && opened) void actions().loadFile(file).then(() => open(opened.text));
-          event.currentTarget.value = "";
-        }}
+      <HiddenFileInput
+        inputRef={tableInput}
+        accept={tableFileTypes}
+        testId="recipe-table-input"
+        // the table first, then the recipe that asked for it
+        onFile={(file) => void (opened && actions().loadFile(file).then(() => open(opened.text)))}
       />
       {outcome?.kind === "other-file" && opened && (
         <span role="alert" className="error recipe-message" data-testid="recipe-other-file">

@@ -3,6 +3,7 @@ import { actions } from "../../state/actions.ts";
 import type { KeptFile } from "../../state/slices/sessionSlice.ts";
 import { useWorkbench } from "../useWorkbench.ts";
 import { formatBytes } from "./formatBytes.ts";
+import { HiddenFileInput } from "./HiddenFileInput.tsx";
 
 const fileLine = (file: KeptFile): string => `${file.name} (${formatBytes(file.bytes)}, sha256 ${file.sha256?.slice(0, 12) ?? "unknown"})`;
 
@@ -26,17 +27,7 @@ export function SessionRestorePrompt() {
             needed again; it is read here and checked by its fingerprint.
           </p>
           <button type="button" onClick={() => input.current?.click()}>Open {restore.file.name}…</button>
-          <input
-            ref={input}
-            type="file"
-            hidden
-            data-testid="session-file-input"
-            onChange={(event) => {
-              const file = event.currentTarget.files?.[0];
-              if (file) void actions().restoreFromFile(file);
-              event.currentTarget.value = "";
-            }}
-          />
+          <HiddenFileInput inputRef={input} testId="session-file-input" onFile={(file) => void actions().restoreFromFile(file)} />
           {afresh}
         </>
       )}

@@ -5,6 +5,7 @@ import { useWorkbench } from "../useWorkbench.ts";
 import { ExportButton } from "./ExportButton.tsx";
 import { SavePicture } from "./SavePicture.tsx";
 import { RecipeControls } from "./RecipeControls.tsx";
+import { HiddenFileInput, tableFileTypes } from "./HiddenFileInput.tsx";
 
 /** Top bar: where the table comes from, the ways to bring one in, reading progress, and the export. */
 export function SourceBar() {
@@ -51,18 +52,7 @@ export function SourceBar() {
       <div className="source-actions">
         <button type="button" onClick={() => void actions().loadDemo()}>Demo table</button>
         <button type="button" onClick={() => input.current?.click()}>Open a file…</button>
-        <input
-          ref={input}
-          type="file"
-          accept=".csv,.tsv,.txt,.parquet,text/csv,text/tab-separated-values"
-          hidden
-          data-testid="file-input"
-          onChange={(event) => {
-            const file = event.currentTarget.files?.[0];
-            if (file) void actions().loadFile(file);
-            event.currentTarget.value = "";
-          }}
-        />
+        <HiddenFileInput inputRef={input} accept={tableFileTypes} testId="file-input" onFile={(file) => void actions().loadFile(file)} />
         <ExportButton />
         <SavePicture />
         <RecipeControls />
